@@ -1,0 +1,22 @@
+import { Umzug, SequelizeStorage } from 'umzug';
+import type { Sequelize } from 'sequelize';
+import * as m0001 from './migrations/0001-foundation';
+
+/**
+ * Migrations are listed here in order rather than globbed, so the same list works under tsx, in
+ * tests and in a bundle. Append new ones at the end; never edit one that has shipped.
+ */
+const migrations = [{ name: '0001-foundation', ...m0001 }];
+
+export function createMigrator(sequelize: Sequelize) {
+  return new Umzug({
+    migrations: migrations.map((m) => ({ name: m.name, up: m.up, down: m.down })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+}
+
+export async function migrate(sequelize: Sequelize) {
+  await createMigrator(sequelize).up();
+}

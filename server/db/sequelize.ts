@@ -1,0 +1,20 @@
+import { Sequelize } from 'sequelize';
+import fs from 'node:fs';
+import path from 'node:path';
+
+/** Opens the SQLite file with WAL and foreign keys on (SQLite leaves foreign keys off by default). */
+export async function openDatabase(databasePath: string): Promise<Sequelize> {
+  if (databasePath !== ':memory:') fs.mkdirSync(path.dirname(path.resolve(databasePath)), { recursive: true });
+  const sequelize = new Sequelize({
+    dialect: 'sqlite',
+    storage: databasePath,
+    logging: false,
+    // One connection: SQLite serialises writers anyway, and a single handle keeps PRAGMAs in force.
+    pool: { max: 1, min: 1, idle: 60_000 },
+    retry: { max: 5, match: [/SQLITE_BUSY/] },
+  });
+  await sequelize.query('PRAGMA journal_mode = WAL;');
+  await sequelize.query('PRAGMA foreign_keys = ON;');
+  await sequelize.query('PRAGMA busy_timeout = 5000;');
+  return sequelize;
+}

@@ -1,0 +1,108 @@
+import { z } from 'zod';
+
+/** Craft Yarn Council Standard Yarn Weight System categories, 0 (lace) to 7 (jumbo). */
+export const YARN_WEIGHTS = [0, 1, 2, 3, 4, 5, 6, 7] as const;
+export const YarnWeightSchema = z
+  .number({ error: 'Yarn weight must be a number from 0 to 7' })
+  .int('Yarn weight must be a whole number')
+  .min(0, 'Yarn weight must be from 0 to 7')
+  .max(7, 'Yarn weight must be from 0 to 7');
+
+export const FIBRES = [
+  'acrylic',
+  'cotton',
+  'wool',
+  'superwash-wool',
+  'acrylic-blend',
+  'cotton-blend',
+  'wool-blend',
+  'bamboo',
+  'polyester',
+  'chenille',
+  'nylon',
+  'alpaca',
+  'mohair',
+  'silk',
+  'other',
+] as const;
+export const FibreSchema = z.enum(FIBRES);
+export type Fibre = z.infer<typeof FibreSchema>;
+
+export const FEATURES = [
+  'fringe',
+  'tassels',
+  'pompoms',
+  'buttons',
+  'beads',
+  'applique',
+  'ribbons',
+  'open-lace',
+] as const;
+export const FeatureSchema = z.enum(FEATURES);
+export type Feature = z.infer<typeof FeatureSchema>;
+
+export const SIZE_CATEGORIES = ['preemie', 'baby', 'crib', 'child', 'teen', 'lap', 'throw', 'twin'] as const;
+export const SizeCategorySchema = z.enum(SIZE_CATEGORIES);
+export type SizeCategory = z.infer<typeof SizeCategorySchema>;
+
+export const POPULATIONS = ['preemie', 'infant', 'child', 'teen', 'adult', 'elder'] as const;
+export const PopulationSchema = z.enum(POPULATIONS);
+export type Population = z.infer<typeof PopulationSchema>;
+
+export const BODY_STITCHES = [
+  'sc',
+  'hdc',
+  'dc',
+  'granny',
+  'ripple',
+  'moss',
+  'shell',
+  'knit-garter',
+  'knit-stockinette',
+  'other',
+] as const;
+export const BodyStitchSchema = z.enum(BODY_STITCHES);
+
+export const BLANKET_STATUSES = [
+  'in_progress',
+  'finished',
+  'booked',
+  'received',
+  'checked',
+  'needs_fix',
+  'declined',
+  'assigned',
+  'packed',
+  'delivered',
+] as const;
+export const BlanketStatusSchema = z.enum(BLANKET_STATUSES);
+export type BlanketStatus = z.infer<typeof BlanketStatusSchema>;
+
+export const LabelNameSchema = z.enum(['first-name', 'anonymous']);
+
+/** Largest measured side we accept, in cm: past this it is a typing mistake, not a blanket. */
+export const MAX_SIDE_CM = 400;
+
+const sideCm = (label: string) =>
+  z
+    .number({ error: `${label} must be a number of centimetres` })
+    .positive(`${label} must be more than 0 cm`)
+    .max(MAX_SIDE_CM, `${label} over ${MAX_SIDE_CM} cm is not a blanket we can take`);
+
+/**
+ * The fields of a blanket that the guideline check reads. The blanket log, the intake
+ * re-measure and POST /api/guidelines/check all speak in these names.
+ */
+export const BlanketFieldsSchema = z.object({
+  widthCm: sideCm('Width'),
+  lengthCm: sideCm('Length'),
+  yarnWeight: YarnWeightSchema,
+  fibres: z.array(FibreSchema).min(1, 'Name at least one fibre').max(6),
+  features: z.array(FeatureSchema).max(FEATURES.length).default([]),
+  machineWashable: z.boolean(),
+  dryerSafe: z.boolean().default(false),
+  smokeFree: z.boolean(),
+  petFree: z.boolean(),
+  newYarn: z.boolean().default(true),
+});
+export type BlanketFields = z.infer<typeof BlanketFieldsSchema>;
