@@ -1,0 +1,95 @@
+import express, { type Express } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import path from 'node:path';
+import fs from 'node:fs';
+import type { Sequelize } from 'sequelize';
+import connectSessionSequelize from 'connect-session-sequelize';
+import type { Config } from './config/env';
+import { configurePassport } from './auth/passport';
+import { csrfProtection } from './auth/csrf';
+import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { mountRoutes, type RouteDef } from './modules/route-table';
+import { allRoutes } from './modules/all-routes';
+
+export interface AppDeps {
+  sequelize: Sequelize;
+  config: Config;
+  sessionSecret: string;
+  /** Folder of the built client; served with a fallback to index.html for client-side routes. */
+  clientDir?: string;
+}
+
+export interface KindloopApp extends Express {
+  locals: Express['locals'] & { routes: RouteDef[]; close: () => void };
+}
+
+export function createApp(deps: AppDeps): KindloopApp {
+  const { sequelize, config } = deps;
+  const app = express() as KindloopApp;
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+        },
+      },
+    }),
+  );
+  app.use('/api', express.json({ limit: '200kb' }));
+
+  const SequelizeStore = connectSessionSequelize(session.Store);
+  const store = new SequelizeStore({
+    db: sequelize,
+    table: 'Session',
+    checkExpirationInterval: 15 * 60_000,
+    extendDefaultFields: (defaults: { data: string; expires: Date }, s: { passport?: { user?: number } }) => ({
+      data: defaults.data,
+      expires: defaults.expires,
+      userId: s.passport?.user ?? null,
+    }),
+  });
+  const passport = configurePassport(config.scryptLogN);
+
+  app.use(
+    '/api',
+    session({
+      name: 'kindloop.sid',
+      secret: deps.sessionSecret,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      // express-session ids are 24 random bytes (192 bits), above OWASP's 128-bit recommendation.
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: config.cookieSecure,
+        maxAge: config.sessionIdleMinutes * 60_000,
+      },
+    }),
+  );
+  app.use('/api', passport.initialize());
+  app.use('/api', passport.session());
+  app.use('/api', csrfProtection);
+
+  const routes = allRoutes({ sequelize, config, passport });
+  app.use(mountRoutes(routes));
+  app.use('/api', notFoundHandler);
+
+  if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) {
+    const dir = deps.clientDir;
+    app.use(express.static(dir, { index: false, maxAge: '1h' }));
+    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(path.join(dir, 'index.html')));
+  }
+  app.use(notFoundHandler);
+  app.use(errorHandler);
+
+  app.locals.routes = routes;
+  app.locals.close = () => (store as unknown as { stopExpiringSessions: () => void }).stopExpiringSessions();
+  return app;
+}

@@ -1,0 +1,5 @@
+/**
+ * Importing this file registers every area's part of the demo scenario, in order.
+ * Each area adds one import line here.
+ */
+export {};

@@ -1,0 +1,36 @@
+import { User } from '../../db/models/user';
+import { IdParamSchema, UserUpdateSchema } from '../../../shared/schemas/user';
+import { validate } from '../../middleware/validate';
+import { HttpError, notFound } from '../../lib/http-error';
+import type { RouteDef } from '../route-table';
+
+export function userRoutes(): RouteDef[] {
+  return [
+    {
+      method: 'get', path: '/api/users', access: ['coordinator'], summary: 'Everyone with an account',
+      handlers: [
+        async (_req, res) => {
+          const users = await User.findAll({ order: [['role', 'ASC'], ['name', 'ASC']] });
+          res.json({ users: users.map((u) => ({ ...u.toPublic(), createdAt: u.createdAt })) });
+        },
+      ],
+    },
+    {
+      method: 'patch', path: '/api/users/:id', access: ['coordinator'], summary: 'Change a role or deactivate',
+      handlers: [
+        validate({ params: IdParamSchema, body: UserUpdateSchema }),
+        async (req, res) => {
+          const id = Number(req.params.id);
+          if (id === req.user!.id) throw new HttpError(409, 'You cannot change your own role or deactivate yourself; ask another coordinator');
+          const user = await User.findByPk(id);
+          if (!user) throw notFound('That person');
+          if (req.body.role !== undefined) user.role = req.body.role;
+          if (req.body.active !== undefined) user.active = req.body.active;
+          await user.save();
+          if (user.active === false) await User.sequelize!.models.Session.destroy({ where: { userId: user.id } });
+          res.json({ user: user.toPublic() });
+        },
+      ],
+    },
+  ];
+}

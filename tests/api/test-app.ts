@@ -1,0 +1,98 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import request from 'supertest';
+import type { Sequelize } from 'sequelize';
+import { loadConfig, type Config } from '../../server/config/env';
+import { openDatabase } from '../../server/db/sequelize';
+import { initModels } from '../../server/db/models/index';
+import { migrate } from '../../server/db/migrate';
+import { seedDemo } from '../../server/db/seed/demo';
+import '../../server/db/seed/all-steps';
+import { createApp, type KindloopApp } from '../../server/app';
+
+export const DEMO_PASSWORD = 'test-demo-password';
+
+export interface TestApp {
+  app: KindloopApp;
+  sequelize: Sequelize;
+  config: Config;
+  dir: string;
+  close: () => Promise<void>;
+}
+
+/** A fresh app on its own temporary SQLite file, migrated and (by default) seeded with the demo drive. */
+export async function makeTestApp(opts: { seed?: boolean; env?: Record<string, string> } = {}): Promise<TestApp> {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'kindloop-test-'));
+  const config = loadConfig({
+    NODE_ENV: 'test',
+    DATABASE_PATH: path.join(dir, 'test.sqlite'),
+    UPLOAD_DIR: path.join(dir, 'uploads'),
+    EXPORT_DIR: path.join(dir, 'exports'),
+    // Cheap hashes keep the suite fast; production keeps OWASP's N=2^17.
+    SCRYPT_LOG_N: '10',
+    DEMO_PASSWORD,
+    ...opts.env,
+  });
+  fs.mkdirSync(config.uploadDir, { recursive: true });
+  fs.mkdirSync(config.exportDir, { recursive: true });
+  const sequelize = await openDatabase(config.databasePath);
+  initModels(sequelize);
+  await migrate(sequelize);
+  if (opts.seed !== false) await seedDemo(sequelize, DEMO_PASSWORD, config.scryptLogN);
+  const app = createApp({ sequelize, config, sessionSecret: 'x'.repeat(40) });
+  return {
+    app,
+    sequelize,
+    config,
+    dir,
+    close: async () => {
+      app.locals.close();
+      await sequelize.close();
+      fs.rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+/** A cookie-keeping client that fetches the CSRF token and sends it on every write. */
+export class Client {
+  agent: ReturnType<typeof request.agent>;
+  token = '';
+  constructor(app: KindloopApp) {
+    this.agent = request.agent(app);
+  }
+  async refreshToken() {
+    const res = await this.agent.get('/api/auth/csrf');
+    this.token = res.body.csrfToken;
+    return this.token;
+  }
+  async login(email: string, password = DEMO_PASSWORD) {
+    await this.refreshToken();
+    const res = await this.agent.post('/api/auth/login').set('X-CSRF-Token', this.token).send({ email, password });
+    await this.refreshToken();
+    return res;
+  }
+  get(url: string) {
+    return this.agent.get(url);
+  }
+  post(url: string, body?: object) {
+    return this.agent.post(url).set('X-CSRF-Token', this.token).send(body);
+  }
+  patch(url: string, body?: object) {
+    return this.agent.patch(url).set('X-CSRF-Token', this.token).send(body);
+  }
+  put(url: string, body?: object) {
+    return this.agent.put(url).set('X-CSRF-Token', this.token).send(body);
+  }
+  delete(url: string) {
+    return this.agent.delete(url).set('X-CSRF-Token', this.token);
+  }
+}
+
+export async function signedIn(app: KindloopApp, who: 'volunteer' | 'organiser' | 'coordinator' | string) {
+  const c = new Client(app);
+  const email = who.includes('@') ? who : `${who}@example.org`;
+  const res = await c.login(email);
+  if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return c;
+}
