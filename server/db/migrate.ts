@@ -1,12 +1,16 @@
 import { Umzug, SequelizeStorage } from 'umzug';
 import type { Sequelize } from 'sequelize';
 import * as m0001 from './migrations/0001-foundation';
+import * as m0002 from './migrations/0002-drive-data';
 
 /**
  * Migrations are listed here in order rather than globbed, so the same list works under tsx, in
  * tests and in a bundle. Append new ones at the end; never edit one that has shipped.
  */
-const migrations = [{ name: '0001-foundation', ...m0001 }];
+const migrations = [
+  { name: '0001-foundation', ...m0001 },
+  { name: '0002-drive-data', ...m0002 },
+];
 
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({

@@ -6,6 +6,14 @@ import { initCaughtMail } from './caught-mail';
 import { initSession } from './session';
 import { initDrive } from './drive';
 import { User } from './user';
+import { initRecipient, Recipient } from './recipient';
+import { initNeed, Need } from './need';
+import { initSite, Site } from './site';
+import { initPledge, Pledge } from './pledge';
+import { initBlanket, Blanket } from './blanket';
+import { initBlanketEvent, BlanketEvent } from './blanket-event';
+import { initPhoto, Photo } from './photo';
+import { initPlan, Plan } from './plan';
 
 /**
  * Every model is initialised here and every association is declared here, in one place.
@@ -18,7 +26,42 @@ export function initModels(sequelize: Sequelize) {
   initCaughtMail(sequelize);
   initSession(sequelize);
   initDrive(sequelize);
+  initRecipient(sequelize);
+  initNeed(sequelize);
+  initSite(sequelize);
+  initPledge(sequelize);
+  initBlanket(sequelize);
+  initBlanketEvent(sequelize);
+  initPhoto(sequelize);
+  initPlan(sequelize);
 
   PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
+
+  Recipient.hasMany(Need, { foreignKey: 'recipientId', as: 'needs' });
+  Need.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
+
+  User.hasMany(Pledge, { foreignKey: 'userId', as: 'pledges' });
+  Pledge.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  Need.hasMany(Pledge, { foreignKey: 'needId', as: 'pledges' });
+  Pledge.belongsTo(Need, { foreignKey: 'needId', as: 'need' });
+
+  User.hasMany(Blanket, { foreignKey: 'userId', as: 'blankets' });
+  Blanket.belongsTo(User, { foreignKey: 'userId', as: 'maker' });
+  Pledge.hasMany(Blanket, { foreignKey: 'pledgeId', as: 'blankets' });
+  Blanket.belongsTo(Pledge, { foreignKey: 'pledgeId', as: 'pledge' });
+  Recipient.hasMany(Blanket, { foreignKey: 'recipientId', as: 'blankets' });
+  Blanket.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
+  Site.hasMany(Blanket, { foreignKey: 'siteId', as: 'blankets' });
+  Blanket.belongsTo(Site, { foreignKey: 'siteId', as: 'site' });
+  Plan.hasMany(Blanket, { foreignKey: 'planId', as: 'blankets' });
+  Blanket.belongsTo(Plan, { foreignKey: 'planId', as: 'plan' });
+  User.hasMany(Plan, { foreignKey: 'userId', as: 'plans' });
+  Plan.belongsTo(User, { foreignKey: 'userId', as: 'owner' });
+
+  Blanket.hasMany(BlanketEvent, { foreignKey: 'blanketId', as: 'events' });
+  BlanketEvent.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+  BlanketEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+  Blanket.hasMany(Photo, { foreignKey: 'blanketId', as: 'photos' });
+  Photo.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
 }
