@@ -114,6 +114,12 @@ describe('check: size', () => {
     ])('length %s cm → fits %s', (l, fits) => {
       expect(rules(good({ widthCm: 45, lengthCm: l }), g).includes('size.length')).toBe(!fits);
     });
+    it('a bound that binary fractions nudge still holds the reading on it', () => {
+      // In floating point 25 × 1.15 is 28.749999999999996, yet 28.75 cm is inside 25 cm + 15%.
+      const g15 = ward({ minLengthCm: 20, maxLengthCm: 25, toleranceUnit: 'percent', toleranceValue: 15 });
+      expect(rules(good({ widthCm: 45, lengthCm: 28.75 }), g15)).not.toContain('size.length');
+      expect(rules(good({ widthCm: 45, lengthCm: 28.76 }), g15)).toContain('size.length');
+    });
     it('shows the tolerance as a percentage', () => {
       const [reason] = check(good({ widthCm: 45, lengthCm: 70 }), g).reasons;
       expect(reason?.message).toContain('(±5%)');
