@@ -1,0 +1,42 @@
+import type { ComponentType } from 'react';
+import { createBrowserRouter } from 'react-router-dom';
+import { AppShell } from '@/components/layout/app-shell';
+import { RequireRole } from '@/components/layout/require-role';
+import type { Role } from '../../shared/schemas/user';
+import { ErrorPage } from './routes/error-page';
+
+type Loader = () => Promise<{ default: ComponentType }>;
+
+/** A lazily loaded page, so maps and charts don't weigh on the first load. */
+const page = (load: Loader) => ({
+  lazy: async () => ({ Component: (await load()).default }),
+});
+
+/** A lazily loaded page behind sign-in; `roles` limits it further. */
+const guarded = (load: Loader, roles?: Role[]) => ({
+  lazy: async () => {
+    const Page = (await load()).default;
+    return {
+      Component: () => (
+        <RequireRole roles={roles}>
+          <Page />
+        </RequireRole>
+      ),
+    };
+  },
+});
+
+export const routes = [
+  { index: true, ...page(() => import('./routes/public/home-page')) },
+  { path: 'sign-in', ...page(() => import('./routes/auth/sign-in')) },
+  { path: 'register', ...page(() => import('./routes/auth/register')) },
+  { path: 'forgot-password', ...page(() => import('./routes/auth/forgot-password')) },
+  { path: 'reset-password', ...page(() => import('./routes/auth/reset-password')) },
+  { path: 'home', ...guarded(() => import('./routes/home/dashboard')) },
+  { path: 'people', ...guarded(() => import('./routes/coordinator/people'), ['coordinator']) },
+  { path: 'mail', ...guarded(() => import('./routes/coordinator/mail'), ['coordinator']) },
+  // Feature pages are added above this line.
+  { path: '*', ...page(() => import('./routes/not-found')) },
+];
+
+export const router = createBrowserRouter([{ path: '/', element: <AppShell />, errorElement: <ErrorPage />, children: routes }]);

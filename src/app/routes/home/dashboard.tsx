@@ -1,0 +1,58 @@
+import { Link } from 'react-router-dom';
+import { ArrowRight } from 'lucide-react';
+import { Card } from '@/components/ui/card';
+import { PageHeader } from '@/components/ui/page-header';
+import { ProgressBar } from '@/components/ui/progress-bar';
+import { navItems } from '@/components/layout/nav-items';
+import { useMe } from '@/features/auth/api/get-me';
+import { useDrive } from '@/features/drive/api/get-drive';
+
+const leads = {
+  volunteer: 'See what the recipients still need, plan your next blanket and keep track of the ones you have made.',
+  organiser: 'Receive, measure and check blankets against each recipient’s rules, and find a home for each one.',
+  coordinator: 'Keep an eye on pledges against needs, look after recipients, sites and people, and plan the deliveries.',
+} as const;
+
+const dayMs = 86_400_000;
+
+export default function DashboardPage() {
+  const { data: user } = useMe();
+  const { data } = useDrive();
+  if (!user) return null;
+  const drive = data?.drive;
+  const start = drive ? new Date(drive.startsOn).getTime() : 0;
+  const end = drive ? new Date(drive.endsOn).getTime() : 0;
+  const elapsed = drive ? (Date.now() - start) / (end - start) : 0;
+  const daysLeft = drive ? Math.max(0, Math.ceil((end - Date.now()) / dayMs)) : 0;
+  const items = navItems.filter((i) => i.roles.includes(user.role) && i.to !== '/home');
+  return (
+    <div className="space-y-8">
+      <PageHeader title={`Hello, ${user.name.split(' ')[0]}`} lead={leads[user.role]} />
+      {drive && (
+        <Card>
+          <h2 className="text-xl font-bold">{drive.name}</h2>
+          <p className="mb-4 text-ink-soft">
+            {daysLeft} days until the last drop-off day · {data?.volunteers ?? 0} makers taking part
+          </p>
+          <ProgressBar value={elapsed} label="How far through the drive we are" tone="marigold" />
+        </Card>
+      )}
+      <section aria-labelledby="go">
+        <h2 id="go" className="mb-3 text-2xl font-bold">
+          Where to go
+        </h2>
+        <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+          {items.map((i) => (
+            <li key={i.to}>
+              <Link to={i.to} className="group flex h-full items-center gap-4 rounded-2xl border border-oat-200 bg-white p-5 text-ink no-underline shadow-sm hover:border-heather-300 hover:bg-heather-50">
+                <i.icon className="size-9 shrink-0 text-heather-700" aria-hidden />
+                <span className="flex-1 text-lg font-bold">{i.label}</span>
+                <ArrowRight className="size-5 text-heather-500 group-hover:translate-x-1" aria-hidden />
+              </Link>
+            </li>
+          ))}
+        </ul>
+      </section>
+    </div>
+  );
+}

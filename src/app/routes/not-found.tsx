@@ -1,0 +1,11 @@
+import { MapPinOff } from 'lucide-react';
+import { EmptyState } from '@/components/ui/empty-state';
+import { ButtonLink } from '@/components/ui/button';
+
+export default function NotFoundPage() {
+  return (
+    <EmptyState icon={MapPinOff} title="We can't find that page" action={<ButtonLink to="/">Back to the start</ButtonLink>}>
+      The link may be old, or the page may have moved. Nothing you made is lost.
+    </EmptyState>
+  );
+}

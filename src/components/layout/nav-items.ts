@@ -1,0 +1,18 @@
+import type { LucideIcon } from 'lucide-react';
+import { Home, Ruler, Users, Mail } from 'lucide-react';
+import type { Role } from '../../../shared/schemas/user';
+
+export interface NavItem {
+  to: string;
+  label: string;
+  icon: LucideIcon;
+  roles: Role[];
+}
+
+/** The main navigation, per role. Each area adds its own entries. */
+export const navItems: NavItem[] = [
+  { to: '/home', label: 'Home', icon: Home, roles: ['volunteer', 'organiser', 'coordinator'] },
+  { to: '/planner', label: 'Planner', icon: Ruler, roles: ['volunteer', 'organiser', 'coordinator'] },
+  { to: '/people', label: 'People', icon: Users, roles: ['coordinator'] },
+  { to: '/mail', label: 'Mail', icon: Mail, roles: ['coordinator'] },
+];

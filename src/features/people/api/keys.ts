@@ -1,0 +1,4 @@
+export const peopleKeys = {
+  all: ['people'] as const,
+  list: () => [...peopleKeys.all, 'list'] as const,
+};

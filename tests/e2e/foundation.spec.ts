@@ -1,0 +1,98 @@
+import { expect, test } from '@playwright/test';
+import { E2E_PASSWORD, shot, signIn, signOut } from './helpers';
+
+const navFor = {
+  volunteer: { has: ['Home', 'Planner'], lacks: ['People', 'Mail'] },
+  organiser: { has: ['Home', 'Planner'], lacks: ['People', 'Mail'] },
+  coordinator: { has: ['Home', 'Planner', 'People', 'Mail'], lacks: [] as string[] },
+} as const;
+
+test('the public home page explains the drive', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.getByRole('heading', { level: 1 })).toContainText('Thimbleford');
+  await expect(page.getByRole('heading', { name: 'How the drive works' })).toBeVisible();
+  await shot(page, 'public-home');
+});
+
+for (const role of ['volunteer', 'organiser', 'coordinator'] as const) {
+  test(`a ${role} signs in, sees their own navigation and signs out`, async ({ page }) => {
+    await signIn(page, role);
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    for (const label of navFor[role].has) await expect(nav.getByRole('link', { name: label, exact: true })).toBeVisible();
+    for (const label of navFor[role].lacks) await expect(nav.getByRole('link', { name: label, exact: true })).toHaveCount(0);
+    await expect(page.getByRole('heading', { level: 1 })).toContainText('Hello');
+    await shot(page, `home-${role}`);
+    await signOut(page);
+  });
+}
+
+test('a new maker registers and lands on their home page', async ({ page }) => {
+  await page.goto('/register');
+  await page.getByLabel('Your name').fill('Juniper Testmaker');
+  await page.getByLabel('E-mail').fill('juniper@example.org');
+  await page.getByLabel('Password').fill('a comfortable passphrase');
+  await page.getByRole('button', { name: 'Create my account' }).click();
+  await expect(page.getByRole('heading', { level: 1 })).toContainText('Hello, Juniper');
+  await expect(page.getByTestId('whoami')).toContainText('Maker');
+});
+
+test('registration names what is wrong', async ({ page }) => {
+  await page.goto('/register');
+  await page.getByLabel('E-mail').fill('not-an-address');
+  await page.getByLabel('Password').fill('short');
+  await page.getByRole('button', { name: 'Create my account' }).click();
+  await expect(page.getByText('Tell us your name')).toBeVisible();
+  await expect(page.getByText('Enter a valid e-mail address')).toBeVisible();
+  await expect(page.getByText('Use at least 8 characters')).toBeVisible();
+});
+
+test('a maker resets a forgotten password through the e-mailed link', async ({ page, browser }) => {
+  await page.goto('/forgot-password');
+  await page.getByLabel('E-mail').fill('maren@example.org');
+  await page.getByRole('button', { name: 'Send the link' }).click();
+  await expect(page.getByText('Check your inbox')).toBeVisible();
+
+  // The coordinator reads the caught mail, as they would on a fresh install with no mail server.
+  const coord = await browser.newPage();
+  await signIn(coord, 'coordinator');
+  await coord.goto('/mail');
+  const link = coord.getByRole('link', { name: /reset-password\?token=/ }).first();
+  await expect(link).toBeVisible({ timeout: 20_000 });
+  const href = await link.getAttribute('href');
+  await shot(coord, 'coordinator-mail');
+  await coord.close();
+
+  await page.goto(new URL(href!).pathname + new URL(href!).search);
+  await page.getByLabel('New password').fill('my new winter passphrase');
+  await page.getByLabel('The same again').fill('my new winter passphrase');
+  await page.getByRole('button', { name: 'Save the new password' }).click();
+  await expect(page.getByText('Your password is changed')).toBeVisible();
+  await signIn(page, 'maren', 'my new winter passphrase');
+  await signOut(page);
+  // The old password no longer works.
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill('maren@example.org');
+  await page.getByLabel('Password').fill(E2E_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page.getByText('Wrong e-mail or password')).toBeVisible();
+});
+
+test('an unknown address shows the not-found page', async ({ page }) => {
+  await page.goto('/no/such/page');
+  await expect(page.getByRole('heading', { name: "We can't find that page" })).toBeVisible();
+});
+
+test('a volunteer opening a coordinator page is told it is for another role', async ({ page }) => {
+  await signIn(page, 'volunteer');
+  await page.goto('/people');
+  await expect(page.getByRole('heading', { name: 'This page is for another role' })).toBeVisible();
+});
+
+test('a signed-out visitor to a private page is sent to sign in and back', async ({ page }) => {
+  await page.goto('/people');
+  await expect(page).toHaveURL(/sign-in\?next=%2Fpeople/);
+  await page.getByLabel('E-mail').fill('coordinator@example.org');
+  await page.getByLabel('Password').fill(E2E_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page.getByRole('heading', { name: 'People' })).toBeVisible();
+});

@@ -1,0 +1,1 @@
+export const E2E_PASSWORD = 'e2e-demo-password';

@@ -1,0 +1,31 @@
+/**
+ * Starts Kindloop for the browser tests: a freshly built client and a new temporary database seeded
+ * with the demo drive, on a port of its own, so the tests never touch data/.
+ */
+import { execSync } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { E2E_PASSWORD } from './password';
+
+const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'kindloop-e2e-'));
+if (!process.env.E2E_SKIP_BUILD) execSync('npx vite build --logLevel warn', { stdio: 'inherit' });
+
+Object.assign(process.env, {
+  NODE_ENV: 'test',
+  PORT: process.env.E2E_PORT ?? '3310',
+  HOST: '127.0.0.1',
+  DATABASE_PATH: path.join(dir, 'e2e.sqlite'),
+  UPLOAD_DIR: path.join(dir, 'uploads'),
+  EXPORT_DIR: path.join(dir, 'exports'),
+  MAIL_CATCHER_PORT: process.env.E2E_MAIL_PORT ?? '2626',
+  DEMO_PASSWORD: E2E_PASSWORD,
+  SCRYPT_LOG_N: '12',
+  // Browser tests sign in many times from one address.
+  LOGIN_MAX_FAILURES: '200',
+});
+
+process.on('exit', () => fs.rmSync(dir, { recursive: true, force: true }));
+for (const sig of ['SIGINT', 'SIGTERM'] as const) process.on(sig, () => process.exit(0));
+
+await import('../../server/index');
