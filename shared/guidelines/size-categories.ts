@@ -1,6 +1,6 @@
 import type { SizeCategory } from '../schemas/blanket';
 
-/** The inch is defined as exactly 2.54 cm (international yard and pound agreement, 1959). */
+/** The inch is exactly 2.54 cm (international yard and pound agreement, 1959; from memory). */
 export const CM_PER_INCH = 2.54;
 
 export const inchesToCm = (inches: number): number => inches * CM_PER_INCH;

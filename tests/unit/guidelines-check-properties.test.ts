@@ -81,7 +81,10 @@ const blanketFor = (g: GuidelineSet): fc.Arbitrary<BlanketFields> =>
       turned: fc.boolean(),
       yarnWeight: fc.constantFrom(...g.yarnWeights),
       fibres: fc.uniqueArray(fc.constantFrom(...takenFibres(g)), { minLength: 1, maxLength: 6 }),
-      features: allowedFeatures(g).length > 0 ? fc.uniqueArray(fc.constantFrom(...allowedFeatures(g))) : fc.constant([]),
+      features:
+        allowedFeatures(g).length > 0
+          ? fc.uniqueArray(fc.constantFrom(...allowedFeatures(g)))
+          : fc.constant<Feature[]>([]),
       extra: fc.record({
         machineWashable: fc.boolean(),
         dryerSafe: fc.boolean(),
