@@ -1,0 +1,74 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
+
+/**
+ * Who may pass each route's gate. 'ok' means the role gets past the gate (the answer may still be
+ * 400 or 404 for the dummy input sent here); a number is the exact refusal expected.
+ * Every route the app mounts must appear here: a route missing from this table fails the test.
+ */
+type Expect = 'ok' | 401 | 403;
+type Row = [anonymous: Expect, volunteer: Expect, organiser: Expect, coordinator: Expect];
+const PUBLIC: Row = ['ok', 'ok', 'ok', 'ok'];
+const SIGNED_IN: Row = [401, 'ok', 'ok', 'ok'];
+const STAFF: Row = [401, 403, 'ok', 'ok'];
+const COORDINATOR: Row = [401, 403, 403, 'ok'];
+
+const matrix: Record<string, Row> = {
+  'GET /api/drive': PUBLIC,
+  'GET /api/health': PUBLIC,
+  'GET /api/auth/csrf': PUBLIC,
+  'POST /api/auth/register': PUBLIC,
+  'POST /api/auth/login': PUBLIC,
+  'POST /api/auth/logout': PUBLIC,
+  'GET /api/auth/me': SIGNED_IN,
+  'POST /api/auth/password-reset': PUBLIC,
+  'POST /api/auth/password-reset/confirm': PUBLIC,
+  'GET /api/users': COORDINATOR,
+  'PATCH /api/users/:id': COORDINATOR,
+  'GET /api/mail/caught': COORDINATOR,
+  'GET /api/mail/caught/:id': COORDINATOR,
+};
+
+const ROLES = ['anonymous', 'volunteer', 'organiser', 'coordinator'] as const;
+// Routes that end a session or burn a rate limit are probed with a fresh client each time.
+const fill = (path: string) => path.replace(/:[A-Za-z]+/g, '999999');
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await makeTestApp();
+});
+afterAll(async () => t.close());
+
+describe('role matrix', () => {
+  it('lists every mounted route', () => {
+    const mounted = t.app.locals.routes.map((r) => `${r.method.toUpperCase()} ${r.path}`);
+    const missing = mounted.filter((k) => !(k in matrix));
+    const stale = Object.keys(matrix).filter((k) => !mounted.includes(k));
+    expect(missing, 'routes without a row in the role matrix').toEqual([]);
+    expect(stale, 'rows for routes that no longer exist').toEqual([]);
+  });
+
+  for (const [key, row] of Object.entries(matrix)) {
+    it(`${key}: ${row.join(' / ')}`, async () => {
+      const [method, path] = key.split(' ');
+      for (let i = 0; i < ROLES.length; i++) {
+        const role = ROLES[i];
+        let res;
+        if (role === 'anonymous') {
+          const agent = request.agent(t.app);
+          const token = (await agent.get('/api/auth/csrf')).body.csrfToken;
+          res = await agent[method.toLowerCase() as 'get'](fill(path)).set('X-CSRF-Token', token).send({});
+        } else {
+          const c: Client = await signedIn(t.app, role);
+          const m = method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
+          res = m === 'get' ? await c.get(fill(path)) : m === 'delete' ? await c.delete(fill(path)) : await c[m](fill(path), {});
+        }
+        const expected = row[i];
+        if (expected === 'ok') expect([401, 403], `${role} should pass the gate of ${key}, got ${res.status}`).not.toContain(res.status);
+        else expect(res.status, `${role} on ${key}`).toBe(expected);
+        expect(res.status, `${role} on ${key} must never be a server error`).toBeLessThan(500);
+      }
+    });
+  }
+});
