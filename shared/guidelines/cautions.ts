@@ -1,5 +1,6 @@
 import type { Population } from '../schemas/blanket';
-import { CM_PER_INCH, COMMON_PRACTICE } from './size-categories';
+import { toCm } from '../sizing/units';
+import { COMMON_PRACTICE } from './size-categories';
 import { formatCm, isInfantPopulation } from './wording';
 
 export interface Caution {
@@ -17,7 +18,7 @@ export const DRIVE_POLICY = 'our own policy (no published source)';
 /** The small-parts test cylinder, in inches as the rule states them. */
 export const SMALL_PARTS_CYLINDER_IN = { diameter: 1.25, shortDepth: 1.0, longDepth: 2.25 } as const;
 
-const cm = (inches: number) => formatCm(inches * CM_PER_INCH);
+const cm = (inches: number) => formatCm(toCm(inches, 'in'));
 const cyl = SMALL_PARTS_CYLINDER_IN;
 
 const INFANT_CAUTIONS: Caution[] = [

@@ -1,10 +1,7 @@
 import type { SizeCategory } from '../schemas/blanket';
+import { toCm } from '../sizing/units';
 
-/** The inch is exactly 2.54 cm (international yard and pound agreement, 1959; from memory). */
-export const CM_PER_INCH = 2.54;
-
-export const inchesToCm = (inches: number): number => inches * CM_PER_INCH;
-export const cmToInches = (cm: number): number => cm / CM_PER_INCH;
+const inchesToCm = (inches: number): number => toCm(inches, 'in');
 
 export const COMMON_PRACTICE = 'common practice (no published source)';
 

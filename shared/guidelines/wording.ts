@@ -1,11 +1,11 @@
 import type { Feature, Fibre, Population } from '../schemas/blanket';
 import type { Verdict } from '../schemas/guidelines';
-import { cmToInches } from './size-categories';
+import { YARN_WEIGHTS } from '../sizing/yarn-weights';
+import { fromCm } from '../sizing/units';
 
-/** Craft Yarn Council Standard Yarn Weight System category names, 0 to 7. */
-const YARN_WEIGHT_NAMES = ['lace', 'super fine', 'fine', 'light', 'medium', 'bulky', 'super bulky', 'jumbo'];
-
-export const yarnWeightName = (weight: number): string => YARN_WEIGHT_NAMES[weight] ?? `weight ${weight}`;
+/** The Craft Yarn Council category name in running text: "super bulky". */
+export const yarnWeightName = (weight: number): string =>
+  YARN_WEIGHTS.find((r) => r.category === weight)?.name.toLowerCase() ?? `weight ${weight}`;
 
 const FIBRE_LABELS: Record<Fibre, string> = {
   acrylic: 'acrylic',
@@ -65,7 +65,7 @@ export const capitalise = (s: string): string => s.charAt(0).toUpperCase() + s.s
 export const formatCm = (cm: number): string => String(Math.round(cm * 10) / 10);
 
 /** Inches rounded to the whole inch, as makers measure. */
-export const formatIn = (cm: number): string => String(Math.round(cmToInches(cm)));
+export const formatIn = (cm: number): string => String(Math.round(fromCm(cm, 'in')));
 
 /** "weight 3 (light)", "weights 2–4 (fine to medium)" for a run, "weights 2, 4 and 6" otherwise. */
 export function formatYarnWeights(weights: readonly number[]): string {

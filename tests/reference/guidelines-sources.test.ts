@@ -6,13 +6,8 @@ import {
   SMALL_PARTS_CYLINDER_IN,
   cautionsFor,
 } from '../../shared/guidelines/cautions';
-import {
-  CM_PER_INCH,
-  SIZE_CATEGORY_TABLE,
-  cmToInches,
-  inchesToCm,
-  sizeCategoryRow,
-} from '../../shared/guidelines/size-categories';
+import { CM_PER_INCH } from '../../shared/sizing/units';
+import { SIZE_CATEGORY_TABLE, sizeCategoryRow } from '../../shared/guidelines/size-categories';
 
 const caution = (id: string) => cautionsFor('preemie').find((c) => c.id === id);
 
@@ -87,11 +82,10 @@ describe('blanket size table: common practice (no published source)', () => {
 });
 
 describe('cm ↔ in at 2.54 exactly (the international inch of 1959, from memory)', () => {
-  it('one inch is 2.54 cm', () => {
+  it('the size table converts through 1 in = 2.54 cm', () => {
     expect(CM_PER_INCH).toBe(2.54);
-    expect(inchesToCm(1)).toBe(2.54);
-    expect(inchesToCm(36)).toBeCloseTo(91.44, 10);
-    expect(cmToInches(152.4)).toBeCloseTo(60, 10);
+    expect(sizeCategoryRow('lap').nominalCm.width).toBeCloseTo(91.44, 10); // 36 in
+    expect(sizeCategoryRow('throw').nominalCm.length).toBeCloseTo(152.4, 10); // 60 in
   });
 
   it('every row in cm is its inches × 2.54', () => {

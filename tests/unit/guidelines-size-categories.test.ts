@@ -1,12 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { SIZE_CATEGORIES } from '../../shared/schemas/blanket';
-import {
-  SIZE_CATEGORY_TABLE,
-  cmToInches,
-  inchesToCm,
-  sizeCategoryFor,
-  sizeCategoryRow,
-} from '../../shared/guidelines/size-categories';
+import { toCm } from '../../shared/sizing/units';
+import { SIZE_CATEGORY_TABLE, sizeCategoryFor, sizeCategoryRow } from '../../shared/guidelines/size-categories';
+
+const inchesToCm = (inches: number) => toCm(inches, 'in');
 
 describe('size category table', () => {
   it('has one row for each size category, in the schema order', () => {
@@ -61,11 +58,5 @@ describe('sizeCategoryFor', () => {
     [50, Number.POSITIVE_INFINITY],
   ])('%s × %s cm fits no category', (w, l) => {
     expect(sizeCategoryFor(w, l)).toBeNull();
-  });
-});
-
-describe('inch conversions', () => {
-  it('round-trips', () => {
-    expect(cmToInches(inchesToCm(36))).toBeCloseTo(36, 12);
   });
 });
