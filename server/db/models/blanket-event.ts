@@ -9,7 +9,7 @@ export class BlanketEvent extends Model<InferAttributes<BlanketEvent>, InferCrea
   declare fromStatus: string | null;
   declare toStatus: string | null;
   declare reason: CreationOptional<string | null>;
-  declare data: CreationOptional<unknown>;
+  declare data: CreationOptional<Record<string, unknown> | null>;
   declare createdAt: CreationOptional<Date>;
 }
 

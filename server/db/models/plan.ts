@@ -5,8 +5,8 @@ export class Plan extends Model<InferAttributes<Plan>, InferCreationAttributes<P
   declare id: CreationOptional<number>;
   declare userId: ForeignKey<number>;
   declare name: string;
-  declare input: unknown;
-  declare summary: CreationOptional<unknown>;
+  declare input: Record<string, unknown>;
+  declare summary: CreationOptional<Record<string, unknown> | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }

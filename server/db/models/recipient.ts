@@ -18,7 +18,7 @@ export class Recipient extends Model<InferAttributes<Recipient>, InferCreationAt
   declare contactEmail: CreationOptional<string | null>;
   declare contactPhone: CreationOptional<string | null>;
   declare deliveryNotes: CreationOptional<string | null>;
-  declare guidelines: unknown;
+  declare guidelines: Record<string, unknown>;
   declare active: CreationOptional<boolean>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
