@@ -6,6 +6,13 @@ import { authRoutes } from './auth/auth.router';
 import { userRoutes } from './users/users.router';
 import { mailRoutes } from './mail/mail.router';
 import { driveRoutes } from './drive/drive.router';
+import { intakeRoutes } from './intake/intake.router';
+import { recipientRoutes } from './recipients/recipients.router';
+import { siteRoutes } from './sites/sites.router';
+import { guidelineRoutes } from './guidelines/guidelines.router';
+import { pledgeRoutes } from './pledges/pledges.router';
+import { blanketRoutes } from './blankets/blankets.router';
+import { photoRoutes } from './photos/photos.router';
 
 export interface RouteContext {
   sequelize: Sequelize;
@@ -17,6 +24,8 @@ export interface RouteContext {
 export function allRoutes(ctx: RouteContext): RouteDef[] {
   return [
     ...driveRoutes(),
+    // Before any /api/blankets/:id route: it holds /api/blankets/tags and /api/blankets/by-code/:code.
+    ...intakeRoutes({ sequelize: ctx.sequelize, publicUrl: ctx.config.publicUrl }),
     ...authRoutes({
       sequelize: ctx.sequelize,
       scryptLogN: ctx.config.scryptLogN,
@@ -26,5 +35,11 @@ export function allRoutes(ctx: RouteContext): RouteDef[] {
     }),
     ...userRoutes(),
     ...mailRoutes(),
+    ...recipientRoutes({ sequelize: ctx.sequelize }),
+    ...siteRoutes(),
+    ...guidelineRoutes(),
+    ...pledgeRoutes(ctx.sequelize),
+    ...blanketRoutes(ctx.sequelize),
+    ...photoRoutes(ctx.sequelize, ctx.config),
   ];
 }

@@ -2,4 +2,7 @@
  * Importing this file registers every area's part of the demo scenario, in order.
  * Each area adds one import line here.
  */
+// Recipients and sites first: pledges and blankets refer to them.
+import './recipients';
+
 export {};
