@@ -62,6 +62,7 @@ export const BODY_STITCHES = [
   'other',
 ] as const;
 export const BodyStitchSchema = z.enum(BODY_STITCHES);
+export type BodyStitch = z.infer<typeof BodyStitchSchema>;
 
 export const BLANKET_STATUSES = [
   'in_progress',

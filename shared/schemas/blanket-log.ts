@@ -1,0 +1,206 @@
+import { z } from 'zod';
+import {
+  BlanketFieldsSchema,
+  BlanketStatusSchema,
+  BodyStitchSchema,
+  LabelNameSchema,
+  type BlanketStatus,
+  type BodyStitch,
+  type Feature,
+  type Fibre,
+  type SizeCategory,
+} from './blanket';
+import type { GuidelineCheckResult } from './guidelines';
+import type { Caution, RecipientBrief } from './pledge';
+import { MAX_REASON_LENGTH } from '../blankets/status';
+import { BORDER_LIBRARY } from '../border/library';
+
+export const MAX_NOTES_LENGTH = 2000;
+export const MAX_COLOURS_LENGTH = 200;
+/** A blanket carries 1 to 4 photos. */
+export const MAX_PHOTOS_PER_BLANKET = 4;
+export const MAX_PHOTO_BYTES = 8 * 1024 * 1024;
+export const PHOTO_MIME_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
+export type PhotoMime = (typeof PHOTO_MIME_TYPES)[number];
+
+const id = (field: string) =>
+  z
+    .number({ error: `${field} must be a number` })
+    .int(`${field} must be a whole number`)
+    .positive(`${field} must be more than 0`);
+
+const borderId = z
+  .string({ error: 'Choose a border from the library' })
+  .refine((v) => BORDER_LIBRARY.some((b) => b.id === v), 'That border is not in the library')
+  .nullable();
+
+/** The parts of a blanket the maker writes in the log, beyond what the guideline check reads. */
+const LogExtras = z.object({
+  colours: z.string({ error: 'Describe the colours in words' }).trim().max(MAX_COLOURS_LENGTH, `Colours: at most ${MAX_COLOURS_LENGTH} characters`).default(''),
+  bodyStitch: BodyStitchSchema.default('other'),
+  borderId: borderId.default(null),
+  planId: id('planId').nullable().default(null),
+  labelName: LabelNameSchema.default('first-name'),
+  notes: z.string().max(MAX_NOTES_LENGTH, `Notes: at most ${MAX_NOTES_LENGTH} characters`).default(''),
+});
+
+/** Logging a blanket starts it in progress, or finished when it is already done. */
+export const INITIAL_STATUSES = ['in_progress', 'finished'] as const;
+
+/** POST /api/blankets */
+export const BlanketCreateSchema = BlanketFieldsSchema.extend({
+  pledgeId: id('pledgeId'),
+  status: z.enum(INITIAL_STATUSES, { error: "A new blanket is either 'in_progress' or 'finished'" }).default('in_progress'),
+})
+  .extend(LogExtras.shape)
+  .strict();
+export type BlanketCreate = z.infer<typeof BlanketCreateSchema>;
+export type BlanketCreateInput = z.input<typeof BlanketCreateSchema>;
+
+const reason = z.string().trim().max(MAX_REASON_LENGTH, `Reason: at most ${MAX_REASON_LENGTH} characters`);
+
+/**
+ * PATCH /api/blankets/:id: any of the logged fields, and/or a status move (`status`, with a
+ * `reason` when it goes backwards). `version` is the one the client last saw.
+ */
+const fields = BlanketFieldsSchema.shape;
+export const BlanketUpdateSchema = z
+  .object({
+    widthCm: fields.widthCm.optional(),
+    lengthCm: fields.lengthCm.optional(),
+    yarnWeight: fields.yarnWeight.optional(),
+    fibres: fields.fibres.optional(),
+    // Defaults belong to creation only: an update that leaves a field out must leave it alone.
+    features: fields.features.removeDefault().optional(),
+    machineWashable: fields.machineWashable.optional(),
+    dryerSafe: fields.dryerSafe.removeDefault().optional(),
+    smokeFree: fields.smokeFree.optional(),
+    petFree: fields.petFree.optional(),
+    newYarn: fields.newYarn.removeDefault().optional(),
+    colours: LogExtras.shape.colours.removeDefault().optional(),
+    bodyStitch: BodyStitchSchema.optional(),
+    borderId: borderId.optional(),
+    planId: id('planId').nullable().optional(),
+    labelName: LabelNameSchema.optional(),
+    notes: LogExtras.shape.notes.removeDefault().optional(),
+    siteId: id('siteId').nullable().optional(),
+    status: BlanketStatusSchema.optional(),
+    reason: reason.optional(),
+    version: z.number().int().min(0).optional(),
+  })
+  .strict();
+export type BlanketUpdate = z.infer<typeof BlanketUpdateSchema>;
+
+/** The fields of an update that change the log itself, as opposed to the status. */
+export const LOG_FIELDS = [
+  'widthCm',
+  'lengthCm',
+  'yarnWeight',
+  'fibres',
+  'features',
+  'machineWashable',
+  'dryerSafe',
+  'smokeFree',
+  'petFree',
+  'newYarn',
+  'colours',
+  'bodyStitch',
+  'borderId',
+  'planId',
+  'labelName',
+  'notes',
+] as const;
+
+const flag = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
+
+/** GET /api/blankets */
+export const BlanketListQuerySchema = z.object({
+  mine: flag.optional(),
+  status: BlanketStatusSchema.optional(),
+  pledgeId: z.coerce.number().int().positive().optional(),
+});
+export type BlanketListQuery = z.infer<typeof BlanketListQuerySchema>;
+
+export const PhotoParamsSchema = z.object({
+  id: z.coerce.number().int().positive('Not a valid id'),
+  photoId: z.coerce.number().int().positive('Not a valid photo id'),
+});
+export const PhotoQuerySchema = z.object({ size: z.enum(['full', 'thumb']).default('full') });
+
+export interface PhotoView {
+  id: number;
+  mime: string;
+  bytes: number;
+  width: number | null;
+  height: number | null;
+  createdAt: string;
+  url: string;
+  thumbUrl: string;
+}
+
+export interface BlanketEventView {
+  id: number;
+  kind: string;
+  fromStatus: BlanketStatus | null;
+  toStatus: BlanketStatus | null;
+  reason: string | null;
+  data: unknown;
+  createdAt: string;
+  actor: { id: number; name: string } | null;
+}
+
+/** A row of "my blankets" (and the organisers' list). */
+export interface BlanketSummary {
+  id: number;
+  code: string;
+  status: BlanketStatus;
+  userId: number;
+  makerName: string;
+  pledgeId: number | null;
+  recipientId: number | null;
+  recipientName: string | null;
+  sizeCategory: SizeCategory | null;
+  widthCm: number;
+  lengthCm: number;
+  yarnWeight: number;
+  colours: string;
+  photoCount: number;
+  coverPhoto: PhotoView | null;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** The next moves this person may make, for the buttons on the blanket page. */
+export interface MoveView {
+  to: BlanketStatus;
+  direction: 'forward' | 'back';
+  action: string;
+}
+
+export interface BlanketDetail extends BlanketSummary {
+  fibres: Fibre[];
+  features: Feature[];
+  bodyStitch: BodyStitch;
+  borderId: string | null;
+  planId: number | null;
+  siteId: number | null;
+  machineWashable: boolean;
+  dryerSafe: boolean;
+  smokeFree: boolean;
+  petFree: boolean;
+  newYarn: boolean;
+  labelName: 'first-name' | 'anonymous';
+  notes: string;
+  receivedAt: string | null;
+  photos: PhotoView[];
+  events: BlanketEventView[];
+  recipient: RecipientBrief | null;
+  /** The recipient's guideline check on the logged fields; null when it has no recipient yet. */
+  selfCheck: GuidelineCheckResult | null;
+  /** Recipients whose guidelines it meets as it is, for a blanket pledged "wherever needed most". */
+  fitsRecipients: Array<{ recipientId: number; name: string }>;
+  cautions: Caution[];
+  moves: MoveView[];
+  editable: boolean;
+}

@@ -1,0 +1,138 @@
+import { z } from 'zod';
+import { SizeCategorySchema, type Population } from './blanket';
+import type { GuidelineSet } from './guidelines';
+
+/** Most blankets one person promises in one pledge; past this it is a typing slip, not a plan. */
+export const MAX_PLEDGE_QUANTITY = 50;
+/** How far ahead a finish date may be, in days: a drive runs for months, not years. */
+export const MAX_PLEDGE_DAYS_AHEAD = 730;
+
+export const PLEDGE_STATUSES = ['active', 'cancelled', 'fulfilled'] as const;
+export const PledgeStatusSchema = z.enum(PLEDGE_STATUSES);
+export type PledgeStatus = z.infer<typeof PledgeStatusSchema>;
+
+/** A real calendar day written YYYY-MM-DD (2027-02-30 is refused, not rolled over). */
+export const IsoDaySchema = z
+  .string({ error: 'Give a date as YYYY-MM-DD' })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Give a date as YYYY-MM-DD')
+  .refine((s) => {
+    const d = new Date(`${s}T00:00:00Z`);
+    return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
+  }, 'That date does not exist');
+
+const quantity = z
+  .number({ error: 'Quantity must be a number' })
+  .int('Quantity must be a whole number')
+  .min(1, 'Pledge at least 1 blanket')
+  .max(MAX_PLEDGE_QUANTITY, `Pledge at most ${MAX_PLEDGE_QUANTITY} blankets at a time`);
+
+const needId = z
+  .number({ error: 'needId must be a number or null' })
+  .int('needId must be a whole number')
+  .positive('needId must be more than 0')
+  .nullable();
+
+/** POST /api/pledges. `needId` null means "wherever it's needed most". */
+export const PledgeCreateSchema = z.object({
+  needId,
+  quantity,
+  sizeCategory: SizeCategorySchema,
+  dueDate: IsoDaySchema,
+});
+export type PledgeCreate = z.infer<typeof PledgeCreateSchema>;
+
+/** PATCH /api/pledges/:id: edit, reduce or push back. `version` guards against two tabs editing at once. */
+export const PledgeUpdateSchema = z
+  .object({
+    needId: needId.optional(),
+    quantity: quantity.optional(),
+    sizeCategory: SizeCategorySchema.optional(),
+    dueDate: IsoDaySchema.optional(),
+    version: z.number().int().min(0).optional(),
+  })
+  .strict()
+  .refine(
+    (v) => v.needId !== undefined || v.quantity !== undefined || v.sizeCategory !== undefined || v.dueDate !== undefined,
+    'Send at least one of needId, quantity, sizeCategory or dueDate',
+  );
+export type PledgeUpdate = z.infer<typeof PledgeUpdateSchema>;
+
+const flag = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
+
+/** GET /api/pledges. Organisers and coordinators see everyone's unless they ask for `mine`. */
+export const PledgeListQuerySchema = z.object({
+  mine: flag.optional(),
+  status: PledgeStatusSchema.optional(),
+  needId: z.coerce.number().int().positive().optional(),
+});
+export type PledgeListQuery = z.infer<typeof PledgeListQuerySchema>;
+
+/** A pledge as the API returns it. */
+export interface PledgeView {
+  id: number;
+  userId: number;
+  makerName?: string;
+  needId: number | null;
+  quantity: number;
+  sizeCategory: z.infer<typeof SizeCategorySchema>;
+  dueDate: string;
+  status: PledgeStatus;
+  version: number;
+  createdAt: string;
+  /** Blankets logged under it so far (any status). */
+  blanketsLogged: number;
+  /** Of those, the ones the maker has finished (anything past in progress, except declined). */
+  blanketsFinished: number;
+  /** Past its date with blankets still to finish. */
+  late: boolean;
+  /** Its date is after the need's deadline (possible after a push-back). */
+  afterDeadline: boolean;
+  need: null | {
+    id: number;
+    sizeCategory: z.infer<typeof SizeCategorySchema>;
+    deadline: string;
+    recipient: RecipientBrief;
+  };
+}
+
+export interface Caution {
+  id: string;
+  text: string;
+  source: string;
+}
+
+/** What a maker needs to know about where a blanket goes: enough to run the self-check at home. */
+export interface RecipientBrief {
+  id: number;
+  name: string;
+  kind: string;
+  population: Population;
+  guidelines: GuidelineSet;
+  guidelineSummary: string[];
+  cautions: Caution[];
+}
+
+/** An open need as a volunteer sees it in "What's needed". */
+export interface OpenNeed {
+  id: number;
+  sizeCategory: z.infer<typeof SizeCategorySchema>;
+  quantity: number;
+  deadline: string;
+  preferences: string | null;
+  /** Blankets promised in active or fulfilled pledges. */
+  pledged: number;
+  stillWanted: number;
+  /** How many more are promised than wanted (0 when not over). */
+  overPledged: number;
+  /** The current user's own active pledges against this need. */
+  myPledged: number;
+  recipient: RecipientBrief;
+}
+
+/** Whether a pledge is past its date with blankets still to finish, on `today` (YYYY-MM-DD). */
+export function isPledgeLate(
+  p: { status: PledgeStatus; dueDate: string; quantity: number; blanketsFinished: number },
+  today: string,
+): boolean {
+  return p.status === 'active' && p.dueDate < today && p.blanketsFinished < p.quantity;
+}
