@@ -32,3 +32,32 @@ export function welcomeMail(name: string, appUrl: string) {
     ].join('\n'),
   };
 }
+
+/** To a maker whose blanket came back from the intake table with something to put right. */
+export function blanketNeedsFixMail(opts: {
+  name: string;
+  code: string;
+  recipientName: string | null;
+  fixes: string[];
+  note?: string;
+  appUrl: string;
+}) {
+  const lines = [
+    `Hello ${opts.name},`,
+    '',
+    `Thank you for blanket ${opts.code}. We checked it at the drop-off table and it needs a small fix`,
+    opts.recipientName ? `before it can go to ${opts.recipientName}:` : 'before it can go out:',
+    '',
+    ...opts.fixes.map((f) => `- ${f}`),
+  ];
+  if (opts.note) lines.push('', `A note from the organiser: ${opts.note}`);
+  lines.push(
+    '',
+    'Once it is done, bring it back to any drop-off point. You can see it under My blankets:',
+    '',
+    opts.appUrl,
+    '',
+    'Kindloop',
+  );
+  return { subject: `Blanket ${opts.code}: a small fix, please`, text: lines.join('\n') };
+}

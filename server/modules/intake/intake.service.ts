@@ -1,0 +1,442 @@
+import { Op, type Sequelize, type Transaction } from 'sequelize';
+import QRCode from 'qrcode';
+import { Blanket } from '../../db/models/blanket';
+import { BlanketEvent } from '../../db/models/blanket-event';
+import { Recipient } from '../../db/models/recipient';
+import { Site } from '../../db/models/site';
+import { User } from '../../db/models/user';
+import { HttpError, notFound } from '../../lib/http-error';
+import { enqueueMail } from '../../mail/outbox';
+import { blanketNeedsFixMail } from '../../mail/templates';
+import { checkTransition } from '../../../shared/blankets/status';
+import { sizeCategoryFor } from '../../../shared/guidelines/size-categories';
+import type { BlanketFields, BlanketStatus } from '../../../shared/schemas/blanket';
+import {
+  CHECKLIST_ITEMS,
+  RECEIVABLE_STATUSES,
+  suggestOutcome,
+  type BlanketTag,
+  type IntakeBlanketView,
+  type IntakeBody,
+  type IntakeQueue,
+  type IntakeQueueItem,
+  type InspectionBody,
+  OUTCOME_LABELS,
+} from '../../../shared/schemas/intake';
+import type { Role } from '../../../shared/schemas/user';
+import { checkAgainst, type CheckAnswer } from '../guidelines/guidelines.service';
+
+export interface Actor {
+  id: number;
+  role: Role;
+}
+
+const INCLUDE = [
+  { model: User, as: 'maker' },
+  { model: Recipient, as: 'recipient' },
+  { model: Site, as: 'site' },
+];
+
+type LoadedBlanket = Blanket & { maker?: User; recipient?: Recipient | null; site?: Site | null };
+
+/** The name on the tag and the manifest: the maker's first name, or "Anonymous" if they chose that. */
+export function makerLabel(b: Pick<Blanket, 'labelName'>, maker: Pick<User, 'name'> | undefined): string {
+  if (b.labelName === 'anonymous' || !maker) return 'Anonymous';
+  return maker.name.trim().split(/\s+/)[0] ?? 'Anonymous';
+}
+
+export function blanketFields(b: Blanket): BlanketFields {
+  return {
+    widthCm: b.widthCm,
+    lengthCm: b.lengthCm,
+    yarnWeight: b.yarnWeight,
+    fibres: b.fibres,
+    features: b.features ?? [],
+    machineWashable: b.machineWashable,
+    dryerSafe: b.dryerSafe,
+    smokeFree: b.smokeFree,
+    petFree: b.petFree,
+    newYarn: b.newYarn,
+  };
+}
+
+async function historyOf(blanketId: number, transaction?: Transaction) {
+  const events = await BlanketEvent.findAll({
+    where: { blanketId },
+    include: [{ model: User, as: 'actor', attributes: ['id', 'name'] }],
+    order: [['createdAt', 'ASC'], ['id', 'ASC']],
+    transaction,
+  });
+  return events.map((e) => {
+    const actor = (e as BlanketEvent & { actor?: User | null }).actor;
+    return {
+      id: e.id,
+      kind: e.kind,
+      fromStatus: e.fromStatus,
+      toStatus: e.toStatus,
+      reason: e.reason ?? null,
+      data: e.data ?? null,
+      createdAt: e.createdAt.toISOString(),
+      actor: actor ? { id: actor.id, name: actor.name } : null,
+    };
+  });
+}
+
+async function view(b: LoadedBlanket, transaction?: Transaction): Promise<IntakeBlanketView> {
+  return {
+    id: b.id,
+    code: b.code,
+    status: b.status,
+    version: b.version,
+    widthCm: b.widthCm,
+    lengthCm: b.lengthCm,
+    yarnWeight: b.yarnWeight,
+    fibres: b.fibres,
+    features: b.features ?? [],
+    colours: b.colours,
+    bodyStitch: b.bodyStitch,
+    machineWashable: b.machineWashable,
+    dryerSafe: b.dryerSafe,
+    smokeFree: b.smokeFree,
+    petFree: b.petFree,
+    newYarn: b.newYarn,
+    notes: b.notes,
+    sizeCategory: sizeCategoryFor(b.widthCm, b.lengthCm),
+    receivedAt: b.receivedAt ? b.receivedAt.toISOString() : null,
+    maker: { id: b.maker?.id ?? b.userId, name: b.maker?.name ?? '', label: makerLabel(b, b.maker) },
+    recipient: b.recipient ? { id: b.recipient.id, name: b.recipient.name, population: b.recipient.population } : null,
+    site: b.site ? { id: b.site.id, name: b.site.name } : null,
+    history: await historyOf(b.id, transaction),
+  };
+}
+
+async function load(where: { id: number } | { code: string }, transaction?: Transaction): Promise<LoadedBlanket> {
+  const b = (await Blanket.findOne({ where, include: INCLUDE, transaction })) as LoadedBlanket | null;
+  if (!b) throw notFound('That blanket');
+  return b;
+}
+
+function checkVersion(b: Blanket, sent: number | undefined) {
+  if (sent !== undefined && sent !== b.version) {
+    throw new HttpError(409, `Someone else changed blanket ${b.code} since you opened it; reload and try again`, [
+      { path: 'version', message: `You had version ${sent}; it is now ${b.version}` },
+    ]);
+  }
+}
+
+/**
+ * The one gate for the status moves intake makes. A walk-in drop-off (finished → received, no
+ * booking) is normal at the table, so intake allows it beside the moves of the status machine.
+ */
+function assertMove(from: BlanketStatus, to: BlanketStatus, actor: Actor, isMaker: boolean, reason?: string | null) {
+  if (from === 'finished' && to === 'received' && (actor.role === 'organiser' || actor.role === 'coordinator')) return;
+  const verdict = checkTransition(from, to, { role: actor.role, isMaker }, reason);
+  if (!verdict.ok) throw new HttpError(verdict.refusal === 'role' ? 403 : 409, verdict.message);
+}
+
+export interface BlanketWithCheck {
+  blanket: IntakeBlanketView;
+  /** The guideline check against where it is meant to go, when it has a recipient. */
+  check: CheckAnswer | null;
+}
+
+async function withCheck(b: LoadedBlanket): Promise<BlanketWithCheck> {
+  const check = b.recipientId ? await checkAgainst(b.recipientId, blanketFields(b)) : null;
+  return { blanket: await view(b), check };
+}
+
+export async function findByCode(code: string): Promise<BlanketWithCheck> {
+  return withCheck(await load({ code }));
+}
+
+export async function findById(id: number): Promise<BlanketWithCheck> {
+  return withCheck(await load({ id }));
+}
+
+const RECEIVABLE_TEXT = RECEIVABLE_STATUSES.join(', ');
+
+export async function receive(sequelize: Sequelize, id: number, input: IntakeBody, actor: Actor): Promise<BlanketWithCheck> {
+  await sequelize.transaction(async (transaction) => {
+    const b = await load({ id }, transaction);
+    checkVersion(b, input.version);
+    if (!(RECEIVABLE_STATUSES as readonly string[]).includes(b.status)) {
+      const where = b.site ? ` at ${b.site.name}` : '';
+      const message =
+        b.status === 'received'
+          ? `Blanket ${b.code} was already received${where}${b.receivedAt ? ` on ${b.receivedAt.toISOString().slice(0, 10)}` : ''}`
+          : `Blanket ${b.code} is ${b.status.replace('_', ' ')}; only a blanket that is ${RECEIVABLE_TEXT} can be received`;
+      throw new HttpError(409, message);
+    }
+    const site = await Site.findByPk(input.siteId, { transaction });
+    if (!site) throw new HttpError(400, 'siteId: there is no such drop-off site', [{ path: 'siteId', message: 'No such drop-off site' }]);
+    if (!site.active) {
+      throw new HttpError(400, `siteId: ${site.name} is closed as a drop-off site`, [
+        { path: 'siteId', message: `${site.name} is not taking blankets` },
+      ]);
+    }
+    const from = b.status;
+    assertMove(from, 'received', actor, b.userId === actor.id);
+    const logged = { widthCm: b.widthCm, lengthCm: b.lengthCm };
+    b.status = 'received';
+    b.siteId = site.id;
+    b.receivedAt = new Date();
+    b.widthCm = input.widthCm;
+    b.lengthCm = input.lengthCm;
+    await b.save({ transaction });
+    await BlanketEvent.create(
+      {
+        blanketId: b.id,
+        actorId: actor.id,
+        kind: 'intake',
+        fromStatus: from,
+        toStatus: 'received',
+        reason: null,
+        data: {
+          siteId: site.id,
+          siteName: site.name,
+          logged,
+          measured: { widthCm: input.widthCm, lengthCm: input.lengthCm },
+          note: input.note ?? null,
+        },
+      },
+      { transaction },
+    );
+  });
+  return findById(id);
+}
+
+function requireReason(reason: string | undefined, message: string) {
+  if (reason && reason.length > 0) return;
+  throw new HttpError(400, `overrideReason: ${message}`, [{ path: 'overrideReason', message }]);
+}
+
+export async function inspect(
+  sequelize: Sequelize,
+  id: number,
+  input: InspectionBody,
+  actor: Actor,
+  appUrl: string,
+): Promise<BlanketWithCheck> {
+  await sequelize.transaction(async (transaction) => {
+    const b = await load({ id }, transaction);
+    checkVersion(b, input.version);
+    if (b.status !== 'received') {
+      throw new HttpError(409, `Blanket ${b.code} is ${b.status.replace('_', ' ')}; receive it at a drop-off site before inspecting it`);
+    }
+    const targetId = input.recipientId ?? b.recipientId;
+    if (!targetId) {
+      throw new HttpError(400, 'recipientId: this blanket has no recipient yet; choose one to check it against', [
+        { path: 'recipientId', message: 'Choose the recipient to check it against' },
+      ]);
+    }
+
+    const before = blanketFields(b);
+    const corrected: BlanketFields = { ...before, ...(input.corrections ?? {}) };
+    const check = await checkAgainst(targetId, corrected, transaction).catch((e: unknown) => {
+      if (e instanceof HttpError && e.status === 404) {
+        throw new HttpError(400, 'recipientId: there is no such recipient', [{ path: 'recipientId', message: 'No such recipient' }]);
+      }
+      throw e;
+    });
+    const suggestion = suggestOutcome(input.checklist, check, check.guidelines);
+    const chose = OUTCOME_LABELS[input.outcome].toLowerCase();
+    const suggested = OUTCOME_LABELS[suggestion.outcome].toLowerCase();
+
+    let finalRecipientId: number = targetId;
+    let overridden = false;
+    let redirectCheck: CheckAnswer | null = null;
+    if (input.outcome === 'redirect') {
+      const to = input.redirectRecipientId!;
+      if (to === targetId) {
+        throw new HttpError(400, 'redirectRecipientId: that is where it was meant to go already', [
+          { path: 'redirectRecipientId', message: 'Choose a different recipient' },
+        ]);
+      }
+      const other = await Recipient.findByPk(to, { transaction });
+      if (!other || !other.active) {
+        throw new HttpError(400, 'redirectRecipientId: there is no such active recipient', [
+          { path: 'redirectRecipientId', message: 'No such active recipient' },
+        ]);
+      }
+      redirectCheck = await checkAgainst(to, corrected, transaction);
+      // Sending it where it fits as it is follows the check, whatever the first suggestion was,
+      // unless the table found something wrong with the blanket itself.
+      const physicalProblem = CHECKLIST_ITEMS.some((item) => item.key !== 'matchesLog' && !input.checklist[item.key]);
+      if (!redirectCheck.ok) {
+        overridden = true;
+        requireReason(input.overrideReason, `${other.name}'s guidelines do not take it as it is; say why it should go there`);
+      } else if (physicalProblem) {
+        overridden = true;
+        requireReason(input.overrideReason, `the check suggests "${suggested}" for what you found on the table; say why it can go as it is`);
+      }
+      finalRecipientId = to;
+    } else if (input.outcome !== suggestion.outcome) {
+      overridden = true;
+      requireReason(input.overrideReason, `the check suggests "${suggested}"; say why you chose "${chose}"`);
+    }
+
+    const fixes = input.outcome === 'needs_fix' ? suggestion.fixes : [];
+    if (input.outcome === 'needs_fix' && fixes.length === 0 && !input.fixNote) {
+      throw new HttpError(400, 'fixNote: tell the maker what to fix', [
+        { path: 'fixNote', message: 'The check found nothing to fix; tell the maker what needs doing' },
+      ]);
+    }
+
+    const toStatus: BlanketStatus = input.outcome === 'redirect' ? 'checked' : input.outcome;
+    assertMove(b.status, toStatus, actor, b.userId === actor.id);
+    const from = b.status;
+    const correctedFields: Partial<Record<keyof BlanketFields, { from: unknown; to: unknown }>> = {};
+    for (const [key, value] of Object.entries(input.corrections ?? {}) as Array<[keyof BlanketFields, unknown]>) {
+      correctedFields[key] = { from: before[key], to: value };
+    }
+    b.set({ ...(input.corrections ?? {}), status: toStatus, recipientId: finalRecipientId });
+    await b.save({ transaction });
+
+    await BlanketEvent.create(
+      {
+        blanketId: b.id,
+        actorId: actor.id,
+        kind: 'inspection',
+        fromStatus: from,
+        toStatus,
+        reason: input.overrideReason ?? null,
+        data: {
+          checklist: input.checklist,
+          corrections: correctedFields,
+          check: {
+            recipientId: check.recipient.id,
+            recipientName: check.recipient.name,
+            verdict: check.verdict,
+            reasons: check.reasons,
+            alsoFits: check.alsoFits,
+          },
+          suggested: { outcome: suggestion.outcome, redirectRecipientId: suggestion.redirectRecipientId },
+          outcome: input.outcome,
+          overridden,
+          redirect:
+            input.outcome === 'redirect'
+              ? { fromRecipientId: targetId, toRecipientId: finalRecipientId, toName: redirectCheck?.recipient.name ?? null }
+              : null,
+          fixes,
+          fixNote: input.fixNote ?? null,
+          note: input.note ?? null,
+        },
+      },
+      { transaction },
+    );
+
+    if (input.outcome === 'needs_fix' && b.maker) {
+      const mail = blanketNeedsFixMail({
+        name: b.maker.name.split(/\s+/)[0] ?? b.maker.name,
+        code: b.code,
+        recipientName: check.recipient.name,
+        fixes,
+        note: input.fixNote,
+        appUrl: `${appUrl}/my/blankets`,
+      });
+      await enqueueMail({ to: b.maker.email, ...mail }, transaction);
+    }
+  });
+  return findById(id);
+}
+
+function dayBounds(isoDay: string): [Date, Date] {
+  // The drive runs in one town, so the server's own time zone decides where a day begins.
+  const [y, m, d] = isoDay.split('-').map(Number) as [number, number, number];
+  return [new Date(y, m - 1, d), new Date(y, m - 1, d + 1)];
+}
+
+function queueItem(b: LoadedBlanket, at: Date | null): IntakeQueueItem {
+  return {
+    id: b.id,
+    code: b.code,
+    status: b.status,
+    makerLabel: makerLabel(b, b.maker),
+    recipientName: b.recipient?.name ?? null,
+    widthCm: b.widthCm,
+    lengthCm: b.lengthCm,
+    sizeCategory: sizeCategoryFor(b.widthCm, b.lengthCm),
+    at: at ? at.toISOString() : null,
+  };
+}
+
+export async function queue(siteId: number, isoDay: string): Promise<IntakeQueue> {
+  const site = await Site.findByPk(siteId);
+  if (!site) throw notFound('That drop-off site');
+  const [start, end] = dayBounds(isoDay);
+  const inDay = { [Op.gte]: start, [Op.lt]: end };
+
+  const intakeEvents = await BlanketEvent.findAll({ where: { kind: 'intake', createdAt: inDay }, order: [['createdAt', 'ASC']] });
+  const inspectionEvents = await BlanketEvent.findAll({ where: { kind: 'inspection', createdAt: inDay }, order: [['createdAt', 'ASC']] });
+  const atSite = (e: BlanketEvent) => (e.data as { siteId?: number } | null)?.siteId === siteId;
+  const arrivedIds = intakeEvents.filter(atSite).map((e) => e.blanketId);
+  const inspectedIds = inspectionEvents.map((e) => e.blanketId);
+
+  const blankets = (await Blanket.findAll({
+    where: {
+      [Op.or]: [
+        { id: { [Op.in]: [...arrivedIds, ...inspectedIds] } },
+        { siteId, status: 'received', receivedAt: { [Op.lt]: end } },
+        { siteId, status: 'booked' },
+      ],
+    },
+    include: INCLUDE,
+    order: [['receivedAt', 'ASC'], ['id', 'ASC']],
+  })) as LoadedBlanket[];
+  const byId = new Map(blankets.map((b) => [b.id, b]));
+
+  const arrived: IntakeQueueItem[] = [];
+  for (const e of intakeEvents.filter(atSite)) {
+    const b = byId.get(e.blanketId);
+    if (b) arrived.push(queueItem(b, e.createdAt));
+  }
+  const inspected: IntakeQueueItem[] = [];
+  const seen = new Set<number>();
+  // Latest inspection per blanket, and only those inspected while at this site.
+  for (const e of [...inspectionEvents].reverse()) {
+    const b = byId.get(e.blanketId);
+    if (!b || b.siteId !== siteId || seen.has(b.id)) continue;
+    seen.add(b.id);
+    inspected.unshift(queueItem(b, e.createdAt));
+  }
+  return {
+    site: { id: site.id, name: site.name },
+    date: isoDay,
+    arrived,
+    waiting: blankets.filter((b) => b.siteId === siteId && b.status === 'received' && b.receivedAt && b.receivedAt < end).map((b) => queueItem(b, b.receivedAt)),
+    inspected,
+    expected: blankets.filter((b) => b.siteId === siteId && b.status === 'booked').map((b) => queueItem(b, null)),
+  };
+}
+
+export async function tags(ids: number[], actor: Actor, appUrl: string): Promise<BlanketTag[]> {
+  const rows = (await Blanket.findAll({ where: { id: { [Op.in]: ids } }, include: INCLUDE })) as LoadedBlanket[];
+  // A volunteer prints tags for their own blankets only; someone else's is "not found", not "forbidden".
+  const visible = rows.filter((b) => actor.role !== 'volunteer' || b.userId === actor.id);
+  const found = new Set(visible.map((b) => b.id));
+  const missing = ids.filter((i) => !found.has(i));
+  if (missing.length > 0) {
+    throw new HttpError(404, `ids: no blanket ${missing.join(', ')} that you can print a tag for`, [
+      { path: 'ids', message: `Not found: ${missing.join(', ')}` },
+    ]);
+  }
+  const byId = new Map(visible.map((b) => [b.id, b]));
+  return Promise.all(
+    ids.map(async (i) => {
+      const b = byId.get(i)!;
+      const link = `${appUrl}/organiser/intake?code=${encodeURIComponent(b.code)}`;
+      const qrSvg = await QRCode.toString(link, { type: 'svg', errorCorrectionLevel: 'M', margin: 1 });
+      return {
+        id: b.id,
+        code: b.code,
+        makerLabel: makerLabel(b, b.maker),
+        widthCm: b.widthCm,
+        lengthCm: b.lengthCm,
+        sizeCategory: sizeCategoryFor(b.widthCm, b.lengthCm),
+        recipientName: b.recipient?.name ?? null,
+        link,
+        qrSvg,
+      };
+    }),
+  );
+}
