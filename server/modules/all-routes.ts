@@ -6,6 +6,8 @@ import { authRoutes } from './auth/auth.router';
 import { userRoutes } from './users/users.router';
 import { mailRoutes } from './mail/mail.router';
 import { driveRoutes } from './drive/drive.router';
+import { toolRoutes } from './tools/tools.router';
+import { planRoutes } from './plans/plans.router';
 import { intakeRoutes } from './intake/intake.router';
 import { recipientRoutes } from './recipients/recipients.router';
 import { siteRoutes } from './sites/sites.router';
@@ -35,6 +37,8 @@ export function allRoutes(ctx: RouteContext): RouteDef[] {
     }),
     ...userRoutes(),
     ...mailRoutes(),
+    ...toolRoutes(),
+    ...planRoutes(),
     ...recipientRoutes({ sequelize: ctx.sequelize }),
     ...siteRoutes(),
     ...guidelineRoutes(),

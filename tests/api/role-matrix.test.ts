@@ -28,6 +28,13 @@ const matrix: Record<string, Row> = {
   'PATCH /api/users/:id': COORDINATOR,
   'GET /api/mail/caught': COORDINATOR,
   'GET /api/mail/caught/:id': COORDINATOR,
+  'POST /api/tools/border-fit': PUBLIC,
+  'POST /api/tools/size-from-gauge': PUBLIC,
+  'POST /api/tools/yarn-estimate': PUBLIC,
+  'GET /api/plans': SIGNED_IN,
+  'POST /api/plans': SIGNED_IN,
+  'GET /api/plans/:id': SIGNED_IN,
+  'DELETE /api/plans/:id': SIGNED_IN,
 };
 
 const ROLES = ['anonymous', 'volunteer', 'organiser', 'coordinator'] as const;
