@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { ROW_TYPES, type RowType } from '../border/row-ends';
 import { FIT_STRATEGIES } from '../border/fit';
 import { ROUND_MODES } from '../border/round';
+import { BODY_STITCHES_FOR_CHAIN } from '../sizing/gauge';
 
 /** Past this an edge is a typing mistake, not a blanket: 2,000 stitches is several metres. */
 export const MAX_EDGE_STITCHES = 2000;
@@ -112,7 +113,9 @@ export const SizeFromGaugeRequestSchema = z
       .number({ error: 'borderDepth must be a number' })
       .min(0, 'borderDepth must be 0 or more')
       .max(50, 'borderDepth must be at most 50'),
-    bodyStitch: z.enum(['sc', 'hdc', 'dc', 'tr', 'dtr'], { error: 'bodyStitch must be one of sc, hdc, dc, tr, dtr' }),
+    bodyStitch: z.enum(BODY_STITCHES_FOR_CHAIN as ['sc', 'hdc', 'dc', 'tr', 'dtr'], {
+      error: `bodyStitch must be one of ${BODY_STITCHES_FOR_CHAIN.join(', ')}`,
+    }),
     stitchMultiple: z.number().int('stitchMultiple must be a whole number').min(1).max(MAX_MULTIPLE).default(1),
     stitchOffset: z.number().int('stitchOffset must be a whole number').min(0).max(MAX_OFFSET).default(0),
     rowMultiple: z.number().int('rowMultiple must be a whole number').min(1).max(MAX_MULTIPLE).default(1),
