@@ -38,7 +38,7 @@ export const PledgeCreateSchema = z.object({
   quantity,
   sizeCategory: SizeCategorySchema,
   dueDate: IsoDaySchema,
-});
+}).strict();
 export type PledgeCreate = z.infer<typeof PledgeCreateSchema>;
 
 /** PATCH /api/pledges/:id: edit, reduce or push back. `version` guards against two tabs editing at once. */

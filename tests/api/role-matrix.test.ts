@@ -35,6 +35,19 @@ const matrix: Record<string, Row> = {
   'POST /api/plans': SIGNED_IN,
   'GET /api/plans/:id': SIGNED_IN,
   'DELETE /api/plans/:id': SIGNED_IN,
+  'GET /api/needs': SIGNED_IN,
+  'GET /api/pledges': SIGNED_IN,
+  'POST /api/pledges': SIGNED_IN,
+  'GET /api/pledges/:id': SIGNED_IN,
+  'PATCH /api/pledges/:id': SIGNED_IN,
+  'DELETE /api/pledges/:id': SIGNED_IN,
+  'GET /api/blankets': SIGNED_IN,
+  'POST /api/blankets': SIGNED_IN,
+  'GET /api/blankets/:id': SIGNED_IN,
+  'PATCH /api/blankets/:id': SIGNED_IN,
+  'POST /api/blankets/:id/photos': SIGNED_IN,
+  'GET /api/blankets/:id/photos/:photoId': SIGNED_IN,
+  'DELETE /api/blankets/:id/photos/:photoId': SIGNED_IN,
 };
 
 const ROLES = ['anonymous', 'volunteer', 'organiser', 'coordinator'] as const;

@@ -6,3 +6,4 @@
 import './recipients';
 
 export {};
+import './volunteering';

@@ -1,0 +1,297 @@
+import type { Transaction } from 'sequelize';
+import { Blanket } from '../../db/models/blanket';
+import { BlanketEvent } from '../../db/models/blanket-event';
+import { Photo } from '../../db/models/photo';
+import { Pledge } from '../../db/models/pledge';
+import { Need } from '../../db/models/need';
+import { Plan } from '../../db/models/plan';
+import { Recipient } from '../../db/models/recipient';
+import { Site } from '../../db/models/site';
+import { User } from '../../db/models/user';
+import { HttpError, notFound } from '../../lib/http-error';
+import type { BlanketFields, BlanketStatus } from '../../../shared/schemas/blanket';
+import {
+  LOG_FIELDS,
+  type BlanketCreate,
+  type BlanketDetail,
+  type BlanketEventView,
+  type BlanketListQuery,
+  type BlanketSummary,
+  type BlanketUpdate,
+  type PhotoView,
+} from '../../../shared/schemas/blanket-log';
+import { checkTransition, isMakerEditable, movesFrom, type TransitionRefusal } from '../../../shared/blankets/status';
+import { check, evaluate, type OtherRecipient } from '../../../shared/guidelines/check';
+import { activeRecipients, guidelinesOf, recipientBrief } from '../pledges/recipient-brief';
+import { readsAll, refreshPledgeStatus, type Actor } from '../pledges/pledges.service';
+import { uniqueBlanketCode } from './blanket-code';
+
+/** BlanketEvent.data is free-form JSON; the model's creation type can't say so. */
+const eventData = (v: unknown) => v as BlanketEvent['data'];
+
+const fieldError = (status: number, path: string, message: string) => new HttpError(status, message, [{ path, message }]);
+
+type Loaded = Blanket & {
+  maker?: User;
+  recipient?: Recipient | null;
+  pledge?: Pledge | null;
+  photos?: Photo[];
+  events?: Array<BlanketEvent & { actor?: User | null }>;
+};
+
+export function blanketFields(b: Blanket): BlanketFields {
+  return {
+    widthCm: b.widthCm,
+    lengthCm: b.lengthCm,
+    yarnWeight: b.yarnWeight,
+    fibres: b.fibres,
+    features: b.features,
+    machineWashable: b.machineWashable,
+    dryerSafe: b.dryerSafe,
+    smokeFree: b.smokeFree,
+    petFree: b.petFree,
+    newYarn: b.newYarn,
+  };
+}
+
+export function photoView(p: Photo): PhotoView {
+  const url = `/api/blankets/${p.blanketId}/photos/${p.id}`;
+  return {
+    id: p.id,
+    mime: p.mime,
+    bytes: p.bytes,
+    width: p.width ?? null,
+    height: p.height ?? null,
+    createdAt: new Date(p.createdAt).toISOString(),
+    url,
+    thumbUrl: `${url}?size=thumb`,
+  };
+}
+
+/** The blanket if this person may see it: its maker, or anyone who reads every blanket. */
+export async function visibleBlanket(actor: Actor, id: number, transaction?: Transaction): Promise<Blanket> {
+  const b = await Blanket.findByPk(id, { transaction });
+  if (!b || (b.userId !== actor.id && !readsAll(actor))) throw notFound('That blanket');
+  return b;
+}
+
+const summaryInclude = [
+  { model: User, as: 'maker', attributes: ['id', 'name'] },
+  { model: Recipient, as: 'recipient' },
+  { model: Pledge, as: 'pledge' },
+  { model: Photo, as: 'photos' },
+];
+
+function summaryOf(b: Loaded): BlanketSummary {
+  const photos = [...(b.photos ?? [])].sort((x, y) => x.id - y.id);
+  return {
+    id: b.id,
+    code: b.code,
+    status: b.status,
+    userId: b.userId,
+    makerName: b.maker?.name ?? '',
+    pledgeId: b.pledgeId ?? null,
+    recipientId: b.recipientId ?? null,
+    recipientName: b.recipient?.name ?? null,
+    sizeCategory: b.pledge?.sizeCategory ?? null,
+    widthCm: b.widthCm,
+    lengthCm: b.lengthCm,
+    yarnWeight: b.yarnWeight,
+    colours: b.colours,
+    photoCount: photos.length,
+    coverPhoto: photos[0] ? photoView(photos[0]) : null,
+    version: b.version,
+    createdAt: new Date(b.createdAt).toISOString(),
+    updatedAt: new Date(b.updatedAt).toISOString(),
+  };
+}
+
+export async function listBlankets(actor: Actor, q: BlanketListQuery): Promise<BlanketSummary[]> {
+  const where: Record<string, unknown> = {};
+  if (!readsAll(actor) || q.mine) where.userId = actor.id;
+  if (q.status) where.status = q.status;
+  if (q.pledgeId) where.pledgeId = q.pledgeId;
+  const rows = (await Blanket.findAll({ where, include: summaryInclude, order: [['createdAt', 'DESC'], ['id', 'DESC']] })) as Loaded[];
+  return rows.map(summaryOf);
+}
+
+/** The recipient's check, run on the logged fields; also which other recipients it would suit. */
+export function selfCheckOf(fields: BlanketFields, recipient: Recipient | null | undefined, all: Recipient[]) {
+  const others: OtherRecipient[] = all.map((r) => ({ recipientId: r.id, name: r.name, guidelines: guidelinesOf(r) }));
+  if (recipient) {
+    return { selfCheck: check(fields, guidelinesOf(recipient), others, { recipientId: recipient.id }), fitsRecipients: [] };
+  }
+  const fitsRecipients = others
+    .filter((o) => evaluate(fields, o.guidelines).reasons.length === 0)
+    .map((o) => ({ recipientId: o.recipientId, name: o.name }));
+  return { selfCheck: null, fitsRecipients };
+}
+
+export async function blanketDetail(actor: Actor, id: number, transaction?: Transaction): Promise<BlanketDetail> {
+  await visibleBlanket(actor, id, transaction);
+  const b = (await Blanket.findByPk(id, {
+    include: [
+      ...summaryInclude,
+      { model: BlanketEvent, as: 'events', include: [{ model: User, as: 'actor', attributes: ['id', 'name'] }] },
+    ],
+    transaction,
+  })) as Loaded;
+  const isMaker = b.userId === actor.id;
+  const { selfCheck, fitsRecipients } = selfCheckOf(blanketFields(b), b.recipient, await activeRecipients(transaction));
+  const brief = b.recipient ? recipientBrief(b.recipient) : null;
+  const events: BlanketEventView[] = [...(b.events ?? [])]
+    .sort((x, y) => new Date(x.createdAt).getTime() - new Date(y.createdAt).getTime() || x.id - y.id)
+    .map((e) => ({
+      id: e.id,
+      kind: e.kind,
+      fromStatus: (e.fromStatus as BlanketStatus | null) ?? null,
+      toStatus: (e.toStatus as BlanketStatus | null) ?? null,
+      reason: e.reason ?? null,
+      data: e.data ?? null,
+      createdAt: new Date(e.createdAt).toISOString(),
+      actor: e.actor ? { id: e.actor.id, name: e.actor.name } : null,
+    }));
+  return {
+    ...summaryOf(b),
+    fibres: b.fibres,
+    features: b.features,
+    bodyStitch: b.bodyStitch as BlanketDetail['bodyStitch'],
+    borderId: b.borderId ?? null,
+    planId: b.planId ?? null,
+    siteId: b.siteId ?? null,
+    machineWashable: b.machineWashable,
+    dryerSafe: b.dryerSafe,
+    smokeFree: b.smokeFree,
+    petFree: b.petFree,
+    newYarn: b.newYarn,
+    labelName: b.labelName,
+    notes: b.notes,
+    receivedAt: b.receivedAt ? new Date(b.receivedAt).toISOString() : null,
+    photos: [...(b.photos ?? [])].sort((x, y) => x.id - y.id).map(photoView),
+    events,
+    recipient: brief,
+    selfCheck,
+    fitsRecipients,
+    cautions: brief?.cautions ?? [],
+    moves: movesFrom(b.status, { role: actor.role, isMaker }).map((m) => ({ to: m.to, direction: m.direction, action: m.action })),
+    editable: isMaker && isMakerEditable(b.status),
+  };
+}
+
+async function checkPlan(actor: Actor, planId: number | null | undefined, transaction: Transaction) {
+  if (planId === null || planId === undefined) return;
+  const plan = await Plan.findOne({ where: { id: planId, userId: actor.id }, transaction });
+  if (!plan) throw fieldError(400, 'planId', 'planId: that is not one of your saved plans');
+}
+
+export async function createBlanket(actor: Actor, body: BlanketCreate, transaction: Transaction): Promise<number> {
+  const pledge = await Pledge.findByPk(body.pledgeId, { include: [{ model: Need, as: 'need' }], transaction });
+  if (!pledge || pledge.userId !== actor.id) throw fieldError(404, 'pledgeId', 'pledgeId: that pledge was not found among yours');
+  if (pledge.status === 'cancelled') throw fieldError(409, 'pledgeId', 'pledgeId: that pledge was cancelled; choose another one');
+  const logged = await Blanket.count({ where: { pledgeId: pledge.id }, transaction });
+  if (logged >= pledge.quantity) {
+    throw fieldError(
+      409,
+      'pledgeId',
+      `pledgeId: that pledge is for ${pledge.quantity} blanket(s) and ${logged} are logged; raise the pledge to log another`,
+    );
+  }
+  await checkPlan(actor, body.planId, transaction);
+  const { pledgeId: _pledgeId, status, ...fields } = body;
+  const b = await Blanket.create(
+    {
+      ...fields,
+      code: await uniqueBlanketCode(transaction),
+      userId: actor.id,
+      pledgeId: pledge.id,
+      recipientId: pledge.need?.recipientId ?? null,
+      status,
+    },
+    { transaction },
+  );
+  await BlanketEvent.create(
+    { blanketId: b.id, actorId: actor.id, kind: 'logged', fromStatus: null, toStatus: status, reason: null, data: eventData(null) },
+    { transaction },
+  );
+  await refreshPledgeStatus(pledge.id, transaction);
+  return b.id;
+}
+
+const REFUSAL_STATUS: Record<TransitionRefusal, number> = { same: 409, skip: 409, role: 403, reason: 400 };
+
+/**
+ * Moves a blanket along its life, as the machine in shared/blankets/status.ts allows, and records
+ * who did it, when and why. Other areas (intake, packing, delivery) move blankets through here.
+ */
+export async function moveBlanketStatus(
+  b: Blanket,
+  to: BlanketStatus,
+  actor: Actor,
+  reason: string | null | undefined,
+  transaction: Transaction,
+  data: unknown = null,
+): Promise<void> {
+  const verdict = checkTransition(b.status, to, { role: actor.role, isMaker: b.userId === actor.id }, reason);
+  if (!verdict.ok) {
+    const path = verdict.refusal === 'reason' ? 'reason' : 'status';
+    throw fieldError(REFUSAL_STATUS[verdict.refusal], path, `${path}: ${verdict.message}`);
+  }
+  const from = b.status;
+  b.status = to;
+  if (to === 'received') b.receivedAt = new Date();
+  await b.save({ transaction });
+  await BlanketEvent.create(
+    { blanketId: b.id, actorId: actor.id, kind: 'status', fromStatus: from, toStatus: to, reason: verdict.reason, data: eventData(data) },
+    { transaction },
+  );
+  await refreshPledgeStatus(b.pledgeId, transaction);
+}
+
+export async function updateBlanket(actor: Actor, id: number, body: BlanketUpdate, transaction: Transaction): Promise<void> {
+  const b = await visibleBlanket(actor, id, transaction);
+  if (body.version !== undefined && body.version !== b.version) {
+    throw new HttpError(409, 'Someone changed this blanket at the same time; reload it and try again', [
+      { path: 'version', message: `You had version ${body.version}; it is now ${b.version}` },
+    ]);
+  }
+  const isMaker = b.userId === actor.id;
+  const changed = LOG_FIELDS.filter((f) => body[f] !== undefined);
+  const wantsSite = body.siteId !== undefined;
+  if (body.reason !== undefined && body.status === undefined) {
+    throw fieldError(400, 'reason', 'reason: a reason goes with a status change');
+  }
+  if (changed.length === 0 && !wantsSite && body.status === undefined) {
+    throw new HttpError(400, 'Nothing to change: send a field of the log, a siteId or a status');
+  }
+
+  if (changed.length > 0 || wantsSite) {
+    if (!isMaker) throw new HttpError(403, 'Only its maker can change what was logged about a blanket');
+    if (!isMakerEditable(b.status)) {
+      throw new HttpError(409, 'This blanket is with the organisers now; ask them if something in the log is wrong');
+    }
+  }
+  if (changed.length > 0) {
+    await checkPlan(actor, body.planId, transaction);
+    const before: Record<string, unknown> = {};
+    for (const f of changed) {
+      before[f] = b.get(f);
+      b.set(f, body[f] as never);
+    }
+    await b.save({ transaction });
+    await BlanketEvent.create(
+      { blanketId: b.id, actorId: actor.id, kind: 'edited', fromStatus: null, toStatus: null, reason: null, data: eventData({ fields: changed, before }) },
+      { transaction },
+    );
+  }
+  if (wantsSite) {
+    if (body.siteId !== null) {
+      const site = await Site.findByPk(body.siteId, { transaction });
+      if (!site || !site.active) throw fieldError(400, 'siteId', 'siteId: choose one of the open drop-off sites');
+    }
+    b.siteId = body.siteId ?? null;
+    await b.save({ transaction });
+  }
+  if (body.status !== undefined) {
+    await moveBlanketStatus(b, body.status, actor, body.reason, transaction, wantsSite ? { siteId: b.siteId ?? null } : null);
+  }
+}

@@ -1,0 +1,225 @@
+import { Op, type Transaction } from 'sequelize';
+import { Pledge } from '../../db/models/pledge';
+import { Need } from '../../db/models/need';
+import { Recipient } from '../../db/models/recipient';
+import { Blanket } from '../../db/models/blanket';
+import { User } from '../../db/models/user';
+import { HttpError, notFound } from '../../lib/http-error';
+import {
+  MAX_PLEDGE_DAYS_AHEAD,
+  isPledgeLate,
+  type PledgeCreate,
+  type PledgeListQuery,
+  type PledgeUpdate,
+  type PledgeView,
+} from '../../../shared/schemas/pledge';
+import type { BlanketStatus, SizeCategory } from '../../../shared/schemas/blanket';
+import { recipientBrief, todayIso, addDaysIso } from './recipient-brief';
+
+export interface Actor {
+  id: number;
+  role: Express.User['role'];
+}
+
+/** Organisers and coordinators read everyone's pledges; volunteers only their own. */
+export const readsAll = (actor: Actor) => actor.role !== 'volunteer';
+
+const fieldError = (status: number, path: string, message: string) => new HttpError(status, message, [{ path, message }]);
+
+/** A blanket counts as finished once it has left the hook, unless intake turned it away. */
+const countsAsFinished = (s: BlanketStatus) => s !== 'in_progress' && s !== 'declined';
+
+interface BlanketCounts {
+  logged: number;
+  finished: number;
+}
+
+async function blanketCounts(pledgeIds: number[], transaction?: Transaction): Promise<Map<number, BlanketCounts>> {
+  const out = new Map<number, BlanketCounts>();
+  if (pledgeIds.length === 0) return out;
+  const rows = await Blanket.findAll({
+    attributes: ['pledgeId', 'status'],
+    where: { pledgeId: { [Op.in]: pledgeIds } },
+    transaction,
+  });
+  for (const b of rows) {
+    const c = out.get(b.pledgeId!) ?? { logged: 0, finished: 0 };
+    c.logged += 1;
+    if (countsAsFinished(b.status)) c.finished += 1;
+    out.set(b.pledgeId!, c);
+  }
+  return out;
+}
+
+const include = (transaction?: Transaction) => ({
+  include: [
+    { model: Need, as: 'need', include: [{ model: Recipient, as: 'recipient' }] },
+    { model: User, as: 'user', attributes: ['id', 'name'] },
+  ],
+  transaction,
+});
+
+function view(p: Pledge, counts: BlanketCounts | undefined, today: string): PledgeView {
+  const c = counts ?? { logged: 0, finished: 0 };
+  const need = p.need ?? null;
+  const user = (p as Pledge & { user?: User }).user;
+  return {
+    id: p.id,
+    userId: p.userId,
+    makerName: user?.name,
+    needId: p.needId ?? null,
+    quantity: p.quantity,
+    sizeCategory: p.sizeCategory,
+    dueDate: p.dueDate,
+    status: p.status,
+    version: p.version,
+    createdAt: new Date(p.createdAt).toISOString(),
+    blanketsLogged: c.logged,
+    blanketsFinished: c.finished,
+    late: isPledgeLate({ status: p.status, dueDate: p.dueDate, quantity: p.quantity, blanketsFinished: c.finished }, today),
+    afterDeadline: need ? p.dueDate > need.deadline : false,
+    need:
+      need && need.recipient
+        ? { id: need.id, sizeCategory: need.sizeCategory, deadline: need.deadline, recipient: recipientBrief(need.recipient) }
+        : null,
+  };
+}
+
+async function views(pledges: Pledge[], transaction?: Transaction): Promise<PledgeView[]> {
+  const counts = await blanketCounts(pledges.map((p) => p.id), transaction);
+  const today = todayIso();
+  return pledges.map((p) => view(p, counts.get(p.id), today));
+}
+
+export async function pledgeView(id: number, transaction?: Transaction): Promise<PledgeView> {
+  const p = await Pledge.findByPk(id, include(transaction));
+  if (!p) throw notFound('That pledge');
+  return (await views([p], transaction))[0]!;
+}
+
+export async function listPledges(actor: Actor, q: PledgeListQuery): Promise<PledgeView[]> {
+  const where: Record<string, unknown> = {};
+  if (!readsAll(actor) || q.mine) where.userId = actor.id;
+  if (q.status) where.status = q.status;
+  if (q.needId) where.needId = q.needId;
+  const pledges = await Pledge.findAll({ where, ...include(), order: [['dueDate', 'ASC'], ['id', 'ASC']] });
+  return views(pledges);
+}
+
+/** The pledge if this person may see it; someone else's is "not found" to a volunteer, never "forbidden". */
+export async function visiblePledge(actor: Actor, id: number, transaction?: Transaction): Promise<Pledge> {
+  const p = await Pledge.findByPk(id, { transaction });
+  if (!p || (p.userId !== actor.id && !readsAll(actor))) throw notFound('That pledge');
+  return p;
+}
+
+async function ownPledge(actor: Actor, id: number, transaction: Transaction): Promise<Pledge> {
+  const p = await visiblePledge(actor, id, transaction);
+  if (p.userId !== actor.id) throw new HttpError(403, 'Only the person who made a pledge can change it');
+  return p;
+}
+
+function checkDueDate(dueDate: string, today: string) {
+  if (dueDate < today) throw fieldError(400, 'dueDate', `dueDate: choose today (${today}) or a later day`);
+  const latest = addDaysIso(today, MAX_PLEDGE_DAYS_AHEAD);
+  if (dueDate > latest) throw fieldError(400, 'dueDate', `dueDate: choose a day before ${latest}`);
+}
+
+/** A need a volunteer may still pledge against, checked against the size they want to make. */
+async function openNeed(needId: number, sizeCategory: SizeCategory, today: string, transaction: Transaction): Promise<Need> {
+  const need = await Need.findByPk(needId, { include: [{ model: Recipient, as: 'recipient' }], transaction });
+  if (!need || !need.recipient) throw fieldError(404, 'needId', 'needId: that need was not found');
+  if (!need.recipient.active || need.deadline < today) {
+    throw fieldError(409, 'needId', `needId: ${need.recipient.name} is no longer collecting for this need`);
+  }
+  if (need.sizeCategory !== sizeCategory) {
+    throw fieldError(400, 'sizeCategory', `sizeCategory: ${need.recipient.name} asks for ${need.sizeCategory} blankets here, not ${sizeCategory}`);
+  }
+  return need;
+}
+
+export async function createPledge(actor: Actor, body: PledgeCreate, transaction: Transaction): Promise<PledgeView> {
+  const today = todayIso();
+  checkDueDate(body.dueDate, today);
+  if (body.needId !== null) {
+    const need = await openNeed(body.needId, body.sizeCategory, today, transaction);
+    if (body.dueDate > need.deadline) {
+      throw fieldError(400, 'dueDate', `dueDate: ${need.recipient!.name} needs these by ${need.deadline}; choose that day or an earlier one`);
+    }
+  }
+  const p = await Pledge.create(
+    { userId: actor.id, needId: body.needId, quantity: body.quantity, sizeCategory: body.sizeCategory, dueDate: body.dueDate },
+    { transaction },
+  );
+  return pledgeView(p.id, transaction);
+}
+
+function checkVersion(sent: number | undefined, current: number) {
+  if (sent !== undefined && sent !== current) {
+    throw new HttpError(409, 'Someone changed this at the same time; reload it and try again', [
+      { path: 'version', message: `You had version ${sent}; it is now ${current}` },
+    ]);
+  }
+}
+
+export async function updatePledge(actor: Actor, id: number, body: PledgeUpdate, transaction: Transaction): Promise<PledgeView> {
+  const p = await ownPledge(actor, id, transaction);
+  checkVersion(body.version, p.version);
+  if (p.status === 'cancelled') throw new HttpError(409, 'This pledge was cancelled; make a new one instead');
+  const today = todayIso();
+  const counts = (await blanketCounts([p.id], transaction)).get(p.id) ?? { logged: 0, finished: 0 };
+
+  const currentNeedId = p.needId ?? null;
+  const needId = body.needId !== undefined ? body.needId : currentNeedId;
+  const sizeCategory = body.sizeCategory ?? p.sizeCategory;
+  const retargeted = needId !== currentNeedId || sizeCategory !== p.sizeCategory;
+  if (retargeted && counts.logged > 0) {
+    throw fieldError(409, body.needId !== undefined ? 'needId' : 'sizeCategory', `You have logged ${counts.logged} blanket(s) under this pledge already; make a new pledge for a different need or size`);
+  }
+  if (needId !== null && retargeted) {
+    await openNeed(needId, sizeCategory, today, transaction);
+  }
+  // A push-back may go past the need's deadline: the pledge then shows as after the deadline
+  // rather than vanishing, so the coordinator can see it and ask.
+  if (body.dueDate !== undefined) checkDueDate(body.dueDate, today);
+  if (body.quantity !== undefined && body.quantity < counts.logged) {
+    throw fieldError(409, 'quantity', `quantity: you have logged ${counts.logged} blanket(s) under this pledge; it cannot be fewer`);
+  }
+
+  p.needId = needId;
+  p.sizeCategory = sizeCategory;
+  if (body.quantity !== undefined) p.quantity = body.quantity;
+  if (body.dueDate !== undefined) p.dueDate = body.dueDate;
+  p.status = counts.finished >= p.quantity ? 'fulfilled' : 'active';
+  await p.save({ transaction });
+  return pledgeView(p.id, transaction);
+}
+
+export async function cancelPledge(actor: Actor, id: number, transaction: Transaction): Promise<PledgeView> {
+  const p = await ownPledge(actor, id, transaction);
+  if (p.status === 'cancelled') return pledgeView(p.id, transaction);
+  const counts = (await blanketCounts([p.id], transaction)).get(p.id);
+  if (counts && counts.logged > 0) {
+    throw new HttpError(
+      409,
+      `You have logged ${counts.logged} blanket(s) under this pledge, so it cannot be cancelled; reduce it to ${counts.logged} instead`,
+      [{ path: 'quantity', message: `Reduce it to ${counts.logged}` }],
+    );
+  }
+  p.status = 'cancelled';
+  await p.save({ transaction });
+  return pledgeView(p.id, transaction);
+}
+
+/** Keeps a pledge's status in step with its blankets: fulfilled once enough are finished. */
+export async function refreshPledgeStatus(pledgeId: number | null | undefined, transaction: Transaction) {
+  if (!pledgeId) return;
+  const p = await Pledge.findByPk(pledgeId, { transaction });
+  if (!p || p.status === 'cancelled') return;
+  const c = (await blanketCounts([p.id], transaction)).get(p.id) ?? { logged: 0, finished: 0 };
+  const next = c.finished >= p.quantity ? 'fulfilled' : 'active';
+  if (next !== p.status) {
+    p.status = next;
+    await p.save({ transaction });
+  }
+}
