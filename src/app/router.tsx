@@ -35,6 +35,13 @@ export const routes = [
   { path: 'home', ...guarded(() => import('./routes/home/dashboard')) },
   { path: 'people', ...guarded(() => import('./routes/coordinator/people'), ['coordinator']) },
   { path: 'mail', ...guarded(() => import('./routes/coordinator/mail'), ['coordinator']) },
+  { path: 'recipients', ...guarded(() => import('./routes/coordinator/recipients'), ['organiser', 'coordinator']) },
+  { path: 'recipients/new', ...guarded(() => import('./routes/coordinator/recipients-new'), ['organiser', 'coordinator']) },
+  { path: 'recipients/:id', ...guarded(() => import('./routes/coordinator/recipients-detail'), ['organiser', 'coordinator']) },
+  { path: 'sites', ...guarded(() => import('./routes/coordinator/sites'), ['coordinator']) },
+  { path: 'organiser/intake', ...guarded(() => import('./routes/organiser/intake'), ['organiser', 'coordinator']) },
+  { path: 'organiser/queue', ...guarded(() => import('./routes/organiser/intake-queue'), ['organiser', 'coordinator']) },
+  { path: 'tags', ...guarded(() => import('./routes/organiser/tag-sheet')) },
   // Feature pages are added above this line.
   { path: '*', ...page(() => import('./routes/not-found')) },
 ];

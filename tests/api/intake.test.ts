@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { InferCreationAttributes } from 'sequelize';
 import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
 import { Blanket } from '../../server/db/models/blanket';
 import { BlanketEvent } from '../../server/db/models/blanket-event';
@@ -26,7 +27,9 @@ const nextCode = () => {
   return codeFromBytes(Uint8Array.from([7, 3, (n >> 5) & 31, n & 31]));
 };
 
-async function blanket(over: Partial<Record<string, unknown>> = {}) {
+type BlanketAttributes = InferCreationAttributes<Blanket>;
+
+async function blanket(over: Partial<Record<keyof BlanketAttributes, unknown>> = {}) {
   const code = nextCode();
   return Blanket.create({
     code,
@@ -44,7 +47,7 @@ async function blanket(over: Partial<Record<string, unknown>> = {}) {
     petFree: true,
     newYarn: true,
     ...over,
-  } as Parameters<typeof Blanket.create>[0]);
+  } as unknown as BlanketAttributes);
 }
 
 const allGood: Checklist = {
@@ -56,7 +59,7 @@ const allGood: Checklist = {
   matchesLog: true,
 };
 
-async function received(over: Partial<Record<string, unknown>> = {}) {
+async function received(over: Partial<Record<keyof BlanketAttributes, unknown>> = {}) {
   const b = await blanket(over);
   const res = await organiser.post(`/api/blankets/${b.id}/intake`, { siteId: hall.id, widthCm: b.widthCm, lengthCm: b.lengthCm });
   expect(res.status).toBe(200);

@@ -1,5 +1,6 @@
 import type { LucideIcon } from 'lucide-react';
 import { Home, Ruler, Users, Mail } from 'lucide-react';
+import { HeartHandshake, MapPin, ScanLine } from 'lucide-react';
 import type { Role } from '../../../shared/schemas/user';
 
 export interface NavItem {
@@ -13,6 +14,9 @@ export interface NavItem {
 export const navItems: NavItem[] = [
   { to: '/home', label: 'Home', icon: Home, roles: ['volunteer', 'organiser', 'coordinator'] },
   { to: '/planner', label: 'Planner', icon: Ruler, roles: ['volunteer', 'organiser', 'coordinator'] },
+  { to: '/organiser/intake', label: 'Intake', icon: ScanLine, roles: ['organiser', 'coordinator'] },
+  { to: '/recipients', label: 'Recipients', icon: HeartHandshake, roles: ['organiser', 'coordinator'] },
+  { to: '/sites', label: 'Sites', icon: MapPin, roles: ['coordinator'] },
   { to: '/people', label: 'People', icon: Users, roles: ['coordinator'] },
   { to: '/mail', label: 'Mail', icon: Mail, roles: ['coordinator'] },
 ];

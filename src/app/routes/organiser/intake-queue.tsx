@@ -1,0 +1,119 @@
+import { useState } from 'react';
+import { Link, useSearchParams } from 'react-router-dom';
+import { Inbox, Printer, ScanLine } from 'lucide-react';
+import { PageHeader } from '@/components/ui/page-header';
+import { Card, CardTitle } from '@/components/ui/card';
+import { ButtonLink } from '@/components/ui/button';
+import { Field, Input, Select } from '@/components/ui/field';
+import { Loading } from '@/components/ui/spinner';
+import { QueryError } from '@/components/ui/query-error';
+import { EmptyState } from '@/components/ui/empty-state';
+import { Checkbox } from '@/components/ui/field';
+import { useIntakeSites } from '@/features/intake/api/get-intake-sites';
+import { useIntakeQueue } from '@/features/intake/api/get-intake-queue';
+import { rememberedSiteId } from '@/features/intake/components/receive-panel';
+import { StatusBadge, categoryText } from '@/features/intake/components/blanket-summary';
+import { formatCm } from '../../../../shared/guidelines/wording';
+import type { IntakeQueueItem } from '../../../../shared/schemas/intake';
+
+const localDay = (d = new Date()) => `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
+const time = (iso: string | null) => (iso ? new Date(iso).toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' }) : '');
+
+function List({ title, items, empty, selected, onSelect }: { title: string; items: IntakeQueueItem[]; empty: string; selected: Set<number>; onSelect: (id: number, on: boolean) => void }) {
+  return (
+    <Card>
+      <CardTitle>
+        {title} <span className="font-normal text-ink-soft">({items.length})</span>
+      </CardTitle>
+      {items.length === 0 ? (
+        <p className="text-ink-soft">{empty}</p>
+      ) : (
+        <ul className="divide-y divide-oat-200">
+          {items.map((i) => (
+            <li key={i.id} className="flex flex-wrap items-center gap-3 py-2">
+              <Checkbox label={<span className="sr-only">Print a tag for {i.code}</span>} checked={selected.has(i.id)} onChange={(e) => onSelect(i.id, e.target.checked)} />
+              <Link to={`/organiser/intake?code=${i.code}`} className="font-mono text-lg font-bold tracking-wider">
+                {i.code}
+              </Link>
+              <StatusBadge status={i.status} />
+              <span>
+                {i.makerLabel} · {formatCm(i.widthCm)} × {formatCm(i.lengthCm)} cm, {categoryText(i.sizeCategory)}
+                {i.recipientName && ` · for ${i.recipientName}`}
+              </span>
+              {i.at && <span className="ml-auto text-sm text-ink-soft">{time(i.at)}</span>}
+            </li>
+          ))}
+        </ul>
+      )}
+    </Card>
+  );
+}
+
+export default function IntakeQueuePage() {
+  const [params, setParams] = useSearchParams();
+  const sites = useIntakeSites();
+  const siteId = Number(params.get('siteId')) || rememberedSiteId() || sites.data?.[0]?.id || null;
+  const date = params.get('date') ?? localDay();
+  const queue = useIntakeQueue(siteId, date);
+  const [selected, setSelected] = useState<Set<number>>(new Set());
+  const onSelect = (id: number, on: boolean) =>
+    setSelected((s) => {
+      const next = new Set(s);
+      if (on) next.add(id);
+      else next.delete(id);
+      return next;
+    });
+
+  return (
+    <div>
+      <PageHeader
+        title="Intake queue"
+        lead="What came in at a drop-off site on a day, what is still waiting to be inspected, and what is booked to come."
+        actions={
+          <>
+            <ButtonLink to="/organiser/intake" variant="secondary">
+              <ScanLine className="size-5" aria-hidden /> Find a blanket
+            </ButtonLink>
+            <ButtonLink to={`/tags?ids=${[...selected].join(',')}`} aria-disabled={selected.size === 0} className={selected.size === 0 ? 'pointer-events-none opacity-60' : ''}>
+              <Printer className="size-5" aria-hidden /> Print {selected.size || ''} tag{selected.size === 1 ? '' : 's'}
+            </ButtonLink>
+          </>
+        }
+      />
+      <div className="mb-6 flex flex-wrap gap-4">
+        <Field label="Drop-off site" className="w-72">
+          {(a) => (
+            <Select id={a.id} value={siteId ?? ''} onChange={(e) => setParams({ siteId: e.target.value, date })}>
+              {(sites.data ?? []).map((s) => (
+                <option key={s.id} value={s.id}>
+                  {s.name}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <Field label="Day" className="w-56">
+          {(a) => <Input id={a.id} type="date" value={date} onChange={(e) => e.target.value && setParams({ siteId: String(siteId ?? ''), date: e.target.value })} />}
+        </Field>
+      </div>
+      {sites.isPending || (siteId !== null && queue.isPending) ? (
+        <Loading />
+      ) : sites.error ? (
+        <QueryError error={sites.error} />
+      ) : queue.error ? (
+        <QueryError error={queue.error} />
+      ) : !queue.data ? (
+        <EmptyState icon={Inbox} title="No drop-off sites yet">
+          A coordinator adds drop-off sites first.
+        </EmptyState>
+      ) : (
+        <div className="grid gap-6 lg:grid-cols-2">
+          <List title="Waiting for inspection" items={queue.data.waiting} empty="Nothing waiting. Well done." selected={selected} onSelect={onSelect} />
+          <List title="Arrived this day" items={queue.data.arrived} empty="Nothing received here on this day yet." selected={selected} onSelect={onSelect} />
+          <List title="Inspected this day" items={queue.data.inspected} empty="Nothing inspected here on this day yet." selected={selected} onSelect={onSelect} />
+          <List title="Booked to come here" items={queue.data.expected} empty="No drop-offs booked for this site." selected={selected} onSelect={onSelect} />
+        </div>
+      )}
+    </div>
+  );
+}
