@@ -96,6 +96,9 @@ test('a fringed blanket for babies fails the check and is sent to the children\'
 
   await page.getByRole('button', { name: 'All six are fine' }).click();
   const result = page.getByTestId('check-result');
+  await page.setViewportSize({ width: 390, height: 844 });
+  await shot(page, 'intake-fringe-phone');
+  await page.setViewportSize({ width: 1280, height: 720 });
   await expect(page.getByTestId('verdict')).toHaveText('A small fix at home, then it can go');
   await expect(result).toContainText('Fringe can wrap around tiny fingers and toes');
   await expect(result).toContainText('Take the fringe off');
