@@ -42,6 +42,7 @@ export const routes = [
   { path: 'organiser/intake', ...guarded(() => import('./routes/organiser/intake'), ['organiser', 'coordinator']) },
   { path: 'organiser/queue', ...guarded(() => import('./routes/organiser/intake-queue'), ['organiser', 'coordinator']) },
   { path: 'tags', ...guarded(() => import('./routes/organiser/tag-sheet')) },
+  { path: 'planner', ...page(() => import('./routes/planner/planner-page')) },
   // Feature pages are added above this line.
   { path: '*', ...page(() => import('./routes/not-found')) },
 ];
