@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { BlanketFieldsSchema, MAX_SIDE_CM, type BlanketStatus } from './blanket';
+import { BlanketFieldsSchema, MAX_SIDE_CM, type BlanketStatus, type Population } from './blanket';
 import type { GuidelineCheckResult, GuidelineSet } from './guidelines';
 import { IsoDaySchema } from './recipient';
 import { normaliseCode } from '../blankets/code';
@@ -248,6 +248,8 @@ export interface BlanketTag {
   lengthCm: number;
   sizeCategory: string | null;
   recipientName: string | null;
+  /** Who it is meant for, so a tag going to babies can carry the safe-sleep reminder. */
+  recipientPopulation: Population | null;
   /** What the QR code holds: a link to this blanket's intake page. */
   link: string;
   /** The QR code as an SVG document. */

@@ -388,6 +388,7 @@ describe('tag sheets', () => {
     const [a, b] = res.body.tags;
     expect(a).toMatchObject({ id: named.id, code: named.code, makerLabel: 'Wren', widthCm: 80, lengthCm: 100, sizeCategory: 'crib' });
     expect(a.link).toMatch(new RegExp(`/organiser/intake\\?code=${named.code}$`));
+    expect(a.recipientPopulation).toBe('infant');
     expect(a.qrSvg).toMatch(/^<svg[\s\S]*<\/svg>\s*$/);
     expect(b.makerLabel).toBe('Anonymous');
     expect(b.qrSvg).not.toBe(a.qrSvg);

@@ -76,6 +76,8 @@ test('an organiser prints tags for blankets waiting at the library', async ({ pa
   await expect(page.getByTestId('tag')).toHaveCount(count);
   await expect(page.getByTestId('tag').first().getByRole('img')).toBeVisible();
   await expect(page.getByTestId('tag').first()).toContainText(/KL-[2-9A-Z]{4}/);
+  // Every blanket waiting at the library is for babies, so every tag carries the safe-sleep line.
+  await expect(page.getByTestId('tag-infant-caution')).toHaveCount(count);
   await shot(page, 'tag-sheet');
   await page.emulateMedia({ media: 'print' });
   await expect(page.getByRole('button', { name: 'Print' })).toBeHidden();

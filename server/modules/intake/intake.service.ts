@@ -434,6 +434,7 @@ export async function tags(ids: number[], actor: Actor, appUrl: string): Promise
         lengthCm: b.lengthCm,
         sizeCategory: sizeCategoryFor(b.widthCm, b.lengthCm),
         recipientName: b.recipient?.name ?? null,
+        recipientPopulation: b.recipient?.population ?? null,
         link,
         qrSvg,
       };

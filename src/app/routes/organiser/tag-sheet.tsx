@@ -7,7 +7,7 @@ import { QueryError } from '@/components/ui/query-error';
 import { EmptyState } from '@/components/ui/empty-state';
 import { useTags } from '@/features/intake/api/get-tags';
 import { categoryText } from '@/features/intake/components/blanket-summary';
-import { formatCm, formatIn } from '../../../../shared/guidelines/wording';
+import { formatCm, formatIn, isInfantPopulation } from '../../../../shared/guidelines/wording';
 
 const svgSrc = (svg: string) => `data:image/svg+xml;charset=utf-8,${encodeURIComponent(svg)}`;
 
@@ -53,6 +53,11 @@ export default function TagSheetPage() {
                 </p>
                 <p className="text-sm">{categoryText(t.sizeCategory)}</p>
                 {t.recipientName && <p className="text-sm">For {t.recipientName}</p>}
+                {t.recipientPopulation && isInfantPopulation(t.recipientPopulation) && (
+                  <p className="mt-1 text-xs font-bold" data-testid="tag-infant-caution">
+                    For supervised cuddles only, never loose in a baby's sleep space. The unit's own policy comes first.
+                  </p>
+                )}
               </div>
             </li>
           ))}
