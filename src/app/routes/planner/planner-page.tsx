@@ -114,13 +114,18 @@ export default function PlannerPage() {
       <p className="mb-6 rounded-xl bg-heather-100 px-4 py-3 text-lg font-bold text-heather-800" data-testid="plan-headline">
         {headline(state, result)}
       </p>
+      <p className="no-print -mt-3 mb-6 lg:hidden">
+        <a href="#plan-result" className="font-bold">
+          Skip to the drawing and the instructions
+        </a>
+      </p>
 
       <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)] print:block">
         <div className="no-print space-y-6">
           <BodyInputs state={state} errors={result.errors} update={update} />
           <BorderInputs state={state} border={result.border} update={update} />
         </div>
-        <div className="space-y-6">
+        <div id="plan-result" className="scroll-mt-4 space-y-6">
           {result.plan && shape ? (
             <>
               <Card className="break-inside-avoid">
