@@ -28,21 +28,6 @@ export function AppShell() {
             <Logo />
             Kindloop
           </Link>
-          <nav aria-label="Main" className="ml-4 hidden flex-1 flex-wrap gap-1 lg:flex">
-            {items.map((i) => (
-              <NavLink
-                key={i.to}
-                to={i.to}
-                end={i.to === '/home'}
-                className={({ isActive }) =>
-                  cn('flex items-center gap-2 rounded-xl px-3 py-2 font-bold no-underline', isActive ? 'bg-heather-100 text-heather-800' : 'text-ink hover:bg-oat-100 hover:text-ink')
-                }
-              >
-                <i.icon className="size-5" aria-hidden />
-                {i.label}
-              </NavLink>
-            ))}
-          </nav>
           <div className="ml-auto flex items-center gap-3">
             {user ? (
               <>
@@ -52,14 +37,14 @@ export function AppShell() {
                 </span>
                 <button
                   type="button"
-                  className="flex min-h-11 items-center gap-2 rounded-xl border-2 border-oat-300 px-3 py-2 font-bold hover:bg-oat-100"
+                  className="flex min-h-11 items-center gap-2 whitespace-nowrap rounded-xl border-2 border-oat-300 px-3 py-2 font-bold hover:bg-oat-100"
                   onClick={() => logout.mutate(undefined, { onSuccess: () => navigate('/') })}
                 >
                   <LogOut className="size-5" aria-hidden /> Sign out
                 </button>
               </>
             ) : (
-              <Link to="/sign-in" className="flex min-h-11 items-center gap-2 rounded-xl bg-heather-700 px-4 py-2 font-bold text-white no-underline hover:bg-heather-800 hover:text-white">
+              <Link to="/sign-in" className="flex min-h-11 items-center gap-2 whitespace-nowrap rounded-xl bg-heather-700 px-4 py-2 font-bold text-white no-underline hover:bg-heather-800 hover:text-white">
                 <LogIn className="size-5" aria-hidden /> Sign in
               </Link>
             )}
@@ -68,6 +53,24 @@ export function AppShell() {
             </button>
           </div>
         </div>
+        <nav aria-label="Main" className="mx-auto hidden max-w-6xl flex-wrap gap-1 px-4 pb-2 lg:flex">
+          {items.map((i) => (
+            <NavLink
+              key={i.to}
+              to={i.to}
+              end={i.to === '/home' || i.to === '/blankets'}
+              className={({ isActive }) =>
+                cn(
+                  'flex items-center gap-2 whitespace-nowrap rounded-xl px-3 py-2 font-bold no-underline',
+                  isActive ? 'bg-heather-100 text-heather-800' : 'text-ink hover:bg-oat-100 hover:text-ink',
+                )
+              }
+            >
+              <i.icon className="size-5" aria-hidden />
+              {i.label}
+            </NavLink>
+          ))}
+        </nav>
         {open && (
           <nav id="mobile-nav" aria-label="Main" className="border-t border-oat-200 px-4 py-2 lg:hidden">
             {items.map((i) => (
