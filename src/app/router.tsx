@@ -43,6 +43,12 @@ export const routes = [
   { path: 'organiser/queue', ...guarded(() => import('./routes/organiser/intake-queue'), ['organiser', 'coordinator']) },
   { path: 'tags', ...guarded(() => import('./routes/organiser/tag-sheet')) },
   { path: 'planner', ...page(() => import('./routes/planner/planner-page')) },
+  { path: 'needs', ...guarded(() => import('./routes/volunteer/needs')) },
+  { path: 'pledges', ...guarded(() => import('./routes/volunteer/my-pledges')) },
+  { path: 'blankets', ...guarded(() => import('./routes/volunteer/my-blankets')) },
+  { path: 'blankets/new', ...guarded(() => import('./routes/volunteer/log-blanket')) },
+  { path: 'blankets/:id', ...guarded(() => import('./routes/volunteer/blanket-detail')) },
+  { path: 'blankets/:id/edit', ...guarded(() => import('./routes/volunteer/edit-blanket')) },
   // Feature pages are added above this line.
   { path: '*', ...page(() => import('./routes/not-found')) },
 ];

@@ -1,6 +1,7 @@
 import type { LucideIcon } from 'lucide-react';
 import { Home, Ruler, Users, Mail } from 'lucide-react';
 import { HeartHandshake, MapPin, ScanLine } from 'lucide-react';
+import { ClipboardList, HandHeart, Layers } from 'lucide-react';
 import type { Role } from '../../../shared/schemas/user';
 
 export interface NavItem {
@@ -14,6 +15,9 @@ export interface NavItem {
 export const navItems: NavItem[] = [
   { to: '/home', label: 'Home', icon: Home, roles: ['volunteer', 'organiser', 'coordinator'] },
   { to: '/planner', label: 'Planner', icon: Ruler, roles: ['volunteer', 'organiser', 'coordinator'] },
+  { to: '/needs', label: 'What’s needed', icon: HandHeart, roles: ['volunteer', 'organiser', 'coordinator'] },
+  { to: '/pledges', label: 'My pledges', icon: ClipboardList, roles: ['volunteer'] },
+  { to: '/blankets', label: 'My blankets', icon: Layers, roles: ['volunteer'] },
   { to: '/organiser/intake', label: 'Intake', icon: ScanLine, roles: ['organiser', 'coordinator'] },
   { to: '/recipients', label: 'Recipients', icon: HeartHandshake, roles: ['organiser', 'coordinator'] },
   { to: '/sites', label: 'Sites', icon: MapPin, roles: ['coordinator'] },

@@ -1,0 +1,151 @@
+import { Link, useLocation, useParams } from 'react-router-dom';
+import { useQueryClient } from '@tanstack/react-query';
+import { Pencil, Tag } from 'lucide-react';
+import { PageHeader } from '@/components/ui/page-header';
+import { Card, CardTitle } from '@/components/ui/card';
+import { Alert } from '@/components/ui/alert';
+import { ButtonLink } from '@/components/ui/button';
+import { Loading } from '@/components/ui/spinner';
+import { QueryError } from '@/components/ui/query-error';
+import { formatDay } from '@/components/ui/format-day';
+import { useMe } from '@/features/auth/api/get-me';
+import { pledgeKeys } from '@/features/pledges/api/keys';
+import { useBlanket } from '@/features/blankets/api/get-blanket';
+import { StatusTimeline } from '@/features/blankets/components/status-timeline';
+import { StatusBadge } from '@/features/blankets/components/status-badge';
+import { StatusActions } from '@/features/blankets/components/status-actions';
+import { SelfCheckPanel } from '@/features/blankets/components/self-check-panel';
+import { PhotoGallery } from '@/features/blankets/components/photo-gallery';
+import { BlanketHistory } from '@/features/blankets/components/blanket-history';
+import { BODY_STITCH_LABELS, sizeLabel, yarnWeightLabel } from '@/features/blankets/components/labels';
+import type { SelfCheck } from '@/features/blankets/hooks/use-self-check';
+import type { BlanketDetail } from '../../../../shared/schemas/blanket-log';
+import { borderById } from '../../../../shared/border/library';
+import { capitalise, featureLabel, fibreLabel, formatCm, formatIn, joinWords } from '../../../../shared/guidelines/wording';
+import type { LoggedState } from './log-blanket';
+
+function outcomeOf(b: BlanketDetail): SelfCheck {
+  if (b.recipient && b.selfCheck) return { state: 'checked', recipient: b.recipient, result: b.selfCheck };
+  return { state: 'anywhere', fits: b.fitsRecipients, nearly: [] };
+}
+
+const yes = (v: boolean) => (v ? 'Yes' : 'No');
+
+function Details({ b }: { b: BlanketDetail }) {
+  const rows: Array<[string, string]> = [
+    ['Size', `${formatCm(b.widthCm)} × ${formatCm(b.lengthCm)} cm (about ${formatIn(b.widthCm)} × ${formatIn(b.lengthCm)} in)`],
+    ['Pledged as', sizeLabel(b.sizeCategory)],
+    ['Yarn weight', yarnWeightLabel(b.yarnWeight)],
+    ['Fibres', capitalise(joinWords(b.fibres.map(fibreLabel)))],
+    ['New yarn', yes(b.newYarn)],
+    ['Colours', b.colours || '—'],
+    ['Body stitch', BODY_STITCH_LABELS[b.bodyStitch] ?? b.bodyStitch],
+    ['Border', b.borderId ? (borderById(b.borderId)?.name ?? b.borderId) : 'None from the library'],
+    ['Trims', b.features.length ? capitalise(joinWords(b.features.map(featureLabel))) : 'None'],
+    ['Machine washable', yes(b.machineWashable)],
+    ['Dryer safe', yes(b.dryerSafe)],
+    ['Smoke-free home', yes(b.smokeFree)],
+    ['Pet-free home', yes(b.petFree)],
+    ['Tag says', b.labelName === 'anonymous' ? 'Anonymous' : `${b.makerName.split(' ')[0]} (first name)`],
+    ['Logged', formatDay(b.createdAt)],
+  ];
+  return (
+    <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[max-content_1fr]">
+      {rows.map(([k, v]) => (
+        <div key={k} className="contents">
+          <dt className="font-bold">{k}</dt>
+          <dd className="mb-2 sm:mb-0">{v}</dd>
+        </div>
+      ))}
+      {b.notes && (
+        <div className="contents">
+          <dt className="font-bold">Notes</dt>
+          <dd className="whitespace-pre-line">{b.notes}</dd>
+        </div>
+      )}
+    </dl>
+  );
+}
+
+/** One blanket: its code, where it is up to, the self-check, photos, every detail and its history. */
+export default function BlanketDetailPage() {
+  const id = Number(useParams().id);
+  const { data: user } = useMe();
+  const blanket = useBlanket(id);
+  const location = useLocation();
+  const qc = useQueryClient();
+  const state = (location.state ?? {}) as LoggedState;
+  if (blanket.isPending || !user) return <Loading />;
+  if (blanket.error) return <QueryError error={blanket.error} title="We could not find that blanket" />;
+  const b = blanket.data;
+  const isMaker = b.userId === user.id;
+  return (
+    <div className="space-y-6">
+      <PageHeader
+        title={`Blanket ${b.code}`}
+        lead={
+          <>
+            {b.recipientName ? `For ${b.recipientName}` : 'Wherever it’s needed most'} · made by {isMaker ? 'you' : b.makerName}
+          </>
+        }
+        actions={
+          <>
+            {b.editable && (
+              <ButtonLink to={`/blankets/${b.id}/edit`} variant="secondary">
+                <Pencil className="size-5" aria-hidden /> Correct the log
+              </ButtonLink>
+            )}
+            {isMaker && (
+              <ButtonLink to="/blankets" variant="quiet">
+                All my blankets
+              </ButtonLink>
+            )}
+          </>
+        }
+      />
+      {state.logged && (
+        <Alert kind="success" title="Saved. Thank you!">
+          <span className="flex items-center gap-2">
+            <Tag className="size-5" aria-hidden /> Write <strong className="font-mono text-lg" data-testid="new-code">{b.code}</strong> on its tag (or print tags from the <Link to="/tags">tag sheet</Link>), so the organisers can find it in the log.
+          </span>
+        </Alert>
+      )}
+      {state.photoError && (
+        <Alert kind="warning" title="The blanket is saved, but the photos did not arrive">
+          {state.photoError} You can add them again below.
+        </Alert>
+      )}
+
+      <Card className="space-y-4">
+        <div className="flex flex-wrap items-center gap-3">
+          <CardTitle as="h2" className="mb-0">
+            Where it’s up to
+          </CardTitle>
+          <StatusBadge status={b.status} />
+        </div>
+        <StatusTimeline status={b.status} />
+        <StatusActions blanket={b} onChanged={() => void qc.invalidateQueries({ queryKey: pledgeKeys.all })} />
+      </Card>
+
+      <div className="grid gap-6 lg:grid-cols-3">
+        <div className="space-y-6 lg:col-span-2">
+          <Card>
+            <CardTitle>Photos</CardTitle>
+            <PhotoGallery blanket={b} isMaker={isMaker} />
+          </Card>
+          <Card>
+            <CardTitle>Details</CardTitle>
+            <Details b={b} />
+          </Card>
+        </div>
+        <div className="space-y-6">
+          <SelfCheckPanel outcome={outcomeOf(b)} cautions={b.cautions} />
+          <Card>
+            <CardTitle>History</CardTitle>
+            <BlanketHistory events={b.events} />
+          </Card>
+        </div>
+      </div>
+    </div>
+  );
+}

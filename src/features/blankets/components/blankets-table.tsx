@@ -1,0 +1,227 @@
+import { useMemo, useState } from 'react';
+import { Link } from 'react-router-dom';
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getPaginationRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table';
+import { ArrowDown, ArrowUp, ArrowUpDown, ChevronLeft, ChevronRight, ImageIcon, Search } from 'lucide-react';
+import { Button } from '@/components/ui/button';
+import { Field, Input, Select } from '@/components/ui/field';
+import { formatDay } from '@/components/ui/format-day';
+import { cn } from '@/components/ui/cn';
+import { BLANKET_STATUSES, type BlanketStatus } from '../../../../shared/schemas/blanket';
+import type { BlanketSummary } from '../../../../shared/schemas/blanket-log';
+import { STATUS_LABELS } from '../../../../shared/blankets/status';
+import { formatCm } from '../../../../shared/guidelines/wording';
+import { StatusBadge } from './status-badge';
+import { StatusTimeline } from './status-timeline';
+
+/** Sorting by status follows the blanket's life, not the alphabet. */
+const STATUS_RANK: Record<BlanketStatus, number> = Object.fromEntries(
+  (['in_progress', 'finished', 'booked', 'received', 'needs_fix', 'declined', 'checked', 'assigned', 'packed', 'delivered'] as BlanketStatus[]).map((s, i) => [s, i]),
+) as Record<BlanketStatus, number>;
+
+const col = createColumnHelper<BlanketSummary>();
+const size = (b: BlanketSummary) => `${formatCm(b.widthCm)} × ${formatCm(b.lengthCm)} cm`;
+
+const columns = [
+  col.accessor('code', {
+    header: 'Code',
+    cell: (c) => (
+      <Link to={`/blankets/${c.row.original.id}`} className="whitespace-nowrap font-mono font-bold">
+        {c.getValue()}
+      </Link>
+    ),
+  }),
+  col.accessor('status', {
+    header: 'Status',
+    sortingFn: (a, b) => STATUS_RANK[a.original.status] - STATUS_RANK[b.original.status],
+    filterFn: 'equals',
+    cell: (c) => (
+      <div className="space-y-1">
+        <StatusBadge status={c.getValue()} />
+        <StatusTimeline status={c.getValue()} compact />
+      </div>
+    ),
+  }),
+  col.accessor((b) => b.recipientName ?? 'Wherever it’s needed most', { id: 'recipient', header: 'Going to' }),
+  col.accessor((b) => b.widthCm * b.lengthCm, { id: 'size', header: 'Size', cell: (c) => <span className="whitespace-nowrap">{size(c.row.original)}</span> }),
+  col.accessor('colours', { header: 'Colours', cell: (c) => c.getValue() || '—' }),
+  col.accessor('createdAt', { header: 'Logged', cell: (c) => <span className="whitespace-nowrap">{formatDay(c.getValue())}</span> }),
+  col.accessor('photoCount', {
+    header: 'Photos',
+    enableGlobalFilter: false,
+    cell: (c) =>
+      c.row.original.coverPhoto ? (
+        <img src={c.row.original.coverPhoto.thumbUrl} alt="" className="size-12 rounded-lg object-cover" loading="lazy" />
+      ) : (
+        <span className="text-ink-soft">None</span>
+      ),
+  }),
+];
+
+function BlanketCard({ b }: { b: BlanketSummary }) {
+  return (
+    <li className="rounded-2xl border border-oat-200 bg-white p-4 shadow-sm" data-testid="blanket-card">
+      <div className="flex items-start gap-3">
+        {b.coverPhoto ? (
+          <img src={b.coverPhoto.thumbUrl} alt="" className="size-20 shrink-0 rounded-xl object-cover" loading="lazy" />
+        ) : (
+          <span className="flex size-20 shrink-0 items-center justify-center rounded-xl bg-oat-100 text-ink-soft">
+            <ImageIcon className="size-8" aria-hidden />
+          </span>
+        )}
+        <div className="min-w-0 flex-1">
+          <Link to={`/blankets/${b.id}`} className="whitespace-nowrap font-mono text-lg font-bold">
+            {b.code}
+          </Link>
+          <p className="leading-snug">{b.recipientName ?? 'Wherever it’s needed most'}</p>
+          <p className="text-sm text-ink-soft">
+            {size(b)}
+            {b.colours ? ` · ${b.colours}` : ''}
+          </p>
+        </div>
+      </div>
+      <div className="mt-3 flex flex-wrap items-center gap-3">
+        <StatusBadge status={b.status} />
+        <StatusTimeline status={b.status} compact />
+      </div>
+    </li>
+  );
+}
+
+const PAGE_SIZES = [10, 25, 50];
+
+/**
+ * "My blankets": sortable, filterable and paged. A table on wide screens, cards on phones, both
+ * drawn from the same rows so a filter or a page applies to whichever you see.
+ */
+export function BlanketsTable({ blankets }: { blankets: BlanketSummary[] }) {
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);
+  const [globalFilter, setGlobalFilter] = useState('');
+  const [status, setStatus] = useState<BlanketStatus | ''>('');
+  const columnFilters = useMemo(() => (status ? [{ id: 'status', value: status }] : []), [status]);
+  const table = useReactTable({
+    data: blankets,
+    columns,
+    state: { sorting, globalFilter, columnFilters },
+    onSortingChange: setSorting,
+    onGlobalFilterChange: setGlobalFilter,
+    globalFilterFn: 'includesString',
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+    getPaginationRowModel: getPaginationRowModel(),
+    initialState: { pagination: { pageSize: 10 } },
+  });
+  const rows = table.getRowModel().rows;
+  const shown = table.getFilteredRowModel().rows.length;
+  const present = new Set(blankets.map((b) => b.status));
+  const statuses = BLANKET_STATUSES.filter((s) => present.has(s));
+
+  return (
+    <div className="space-y-4">
+      <div className="grid gap-4 sm:grid-cols-3">
+        <Field label="Search" className="sm:col-span-2">
+          {({ id }) => (
+            <div className="relative">
+              <Search className="pointer-events-none absolute left-3 top-1/2 size-5 -translate-y-1/2 text-ink-soft" aria-hidden />
+              <Input id={id} type="search" placeholder="Code, recipient or colour" value={globalFilter} onChange={(e) => setGlobalFilter(e.target.value)} className="pl-10" />
+            </div>
+          )}
+        </Field>
+        <Field label="Status">
+          {({ id }) => (
+            <Select id={id} value={status} onChange={(e) => setStatus(e.target.value as BlanketStatus | '')}>
+              <option value="">All</option>
+              {statuses.map((s) => (
+                <option key={s} value={s}>
+                  {STATUS_LABELS[s]}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+      </div>
+      <p className="text-ink-soft" aria-live="polite">
+        {shown === blankets.length ? `${blankets.length} blanket${blankets.length === 1 ? '' : 's'}` : `${shown} of ${blankets.length} blankets`}
+      </p>
+
+      <div className="hidden overflow-x-auto rounded-2xl border border-oat-200 bg-white md:block">
+        <table className="w-full text-left">
+          <thead className="border-b border-oat-200 bg-oat-50">
+            {table.getHeaderGroups().map((hg) => (
+              <tr key={hg.id}>
+                {hg.headers.map((h) => {
+                  const sorted = h.column.getIsSorted();
+                  const Icon = sorted === 'asc' ? ArrowUp : sorted === 'desc' ? ArrowDown : ArrowUpDown;
+                  return (
+                    <th key={h.id} scope="col" className="px-4 py-3" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}>
+                      {h.column.getCanSort() ? (
+                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 font-bold hover:text-heather-800">
+                          {flexRender(h.column.columnDef.header, h.getContext())}
+                          <Icon className={cn('size-4', sorted ? 'text-heather-700' : 'text-ink-soft')} aria-hidden />
+                        </button>
+                      ) : (
+                        flexRender(h.column.columnDef.header, h.getContext())
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {rows.map((r) => (
+              <tr key={r.id} className="border-b border-oat-100 last:border-0 hover:bg-oat-50" data-testid="blanket-row">
+                {r.getVisibleCells().map((c) => (
+                  <td key={c.id} className="px-4 py-3 align-middle">
+                    {flexRender(c.column.columnDef.cell, c.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+
+      <ul className="space-y-4 md:hidden">
+        {rows.map((r) => (
+          <BlanketCard key={r.id} b={r.original} />
+        ))}
+      </ul>
+
+      {shown === 0 && <p className="py-6 text-center text-ink-soft">No blankets match. Clear the search or choose another status.</p>}
+
+      {shown > PAGE_SIZES[0]! && (
+        <nav aria-label="Pages" className="flex flex-wrap items-center justify-between gap-3">
+          <Button variant="secondary" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
+            <ChevronLeft className="size-5" aria-hidden /> Previous
+          </Button>
+          <span>
+            Page {table.getState().pagination.pageIndex + 1} of {table.getPageCount()}
+          </span>
+          <label className="flex items-center gap-2">
+            Per page
+            <Select value={table.getState().pagination.pageSize} onChange={(e) => table.setPageSize(Number(e.target.value))} className="w-auto">
+              {PAGE_SIZES.map((n) => (
+                <option key={n} value={n}>
+                  {n}
+                </option>
+              ))}
+            </Select>
+          </label>
+          <Button variant="secondary" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
+            Next <ChevronRight className="size-5" aria-hidden />
+          </Button>
+        </nav>
+      )}
+    </div>
+  );
+}

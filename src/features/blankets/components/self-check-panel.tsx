@@ -1,0 +1,74 @@
+import { CheckCircle2, ClipboardCheck, Wrench, XCircle } from 'lucide-react';
+import { Cautions } from '@/components/ui/cautions';
+import { cn } from '@/components/ui/cn';
+import { joinWords } from '../../../../shared/guidelines/wording';
+import type { Verdict } from '../../../../shared/schemas/guidelines';
+import type { Caution } from '../../../../shared/schemas/pledge';
+import type { SelfCheck } from '../hooks/use-self-check';
+
+/** The check's verdicts as a maker hears them at home, before anything is decided at intake. */
+const VERDICT_FOR_MAKER: Record<Verdict, string> = {
+  ready: 'Ready to go',
+  mend: 'A small fix at home and it can go',
+  reroute: 'As it is, it would go to another recipient instead',
+  decline: 'As it is, it would be turned down',
+};
+
+/**
+ * What the guideline check says about the blanket, in the maker's words: each problem, and how to
+ * put it right at home where that can be done. Never blocks saving: the maker decides.
+ */
+export function SelfCheckPanel({ outcome, cautions = [], className }: { outcome: SelfCheck; cautions?: Caution[]; className?: string }) {
+  return (
+    <section aria-labelledby="self-check-title" aria-live="polite" className={cn('space-y-4 rounded-2xl border-2 border-heather-300 bg-white p-5', className)} data-testid="self-check">
+      <h2 id="self-check-title" className="flex items-center gap-2 text-xl font-bold">
+        <ClipboardCheck className="size-6 text-heather-700" aria-hidden /> Self-check
+      </h2>
+      {outcome.state === 'incomplete' && <p className="text-ink-soft">Fill in {joinWords(outcome.missing)} and the check will tell you whether it meets the guidelines.</p>}
+
+      {outcome.state === 'checked' && outcome.result.ok && (
+        <p className="flex items-start gap-2 font-bold text-moss-700" data-testid="self-check-ok">
+          <CheckCircle2 className="mt-0.5 size-6 shrink-0" aria-hidden /> It meets {outcome.recipient.name}’s guidelines.
+        </p>
+      )}
+      {outcome.state === 'checked' && !outcome.result.ok && (
+        <div className="space-y-3" data-testid="self-check-problems">
+          <p className="font-bold text-brick-700">
+            {VERDICT_FOR_MAKER[outcome.result.verdict]}: {outcome.result.reasons.length === 1 ? 'one thing' : `${outcome.result.reasons.length} things`} would be caught at intake for{' '}
+            {outcome.recipient.name}.
+          </p>
+          <ul className="space-y-3">
+            {outcome.result.reasons.map((r) => (
+              <li key={r.rule} className="rounded-xl border border-brick-500/40 bg-brick-100 p-3">
+                <p className="flex items-start gap-2">
+                  <XCircle className="mt-1 size-5 shrink-0 text-brick-700" aria-hidden />
+                  {r.message}
+                </p>
+                {r.fix && (
+                  <p className="mt-2 flex items-start gap-2 font-bold">
+                    <Wrench className="mt-1 size-5 shrink-0 text-heather-700" aria-hidden /> Fix at home: {r.fix}
+                  </p>
+                )}
+              </li>
+            ))}
+          </ul>
+          {outcome.result.alsoFits.length > 0 && <p>As it is, it would suit {joinWords(outcome.result.alsoFits.map((r) => r.name), 'or')}.</p>}
+        </div>
+      )}
+      {outcome.state === 'checked' && outcome.result.notes.map((n) => <p key={n} className="text-ink-soft">{n}</p>)}
+
+      {outcome.state === 'anywhere' &&
+        (outcome.fits.length > 0 ? (
+          <p className="flex items-start gap-2 font-bold text-moss-700" data-testid="self-check-ok">
+            <CheckCircle2 className="mt-0.5 size-6 shrink-0" aria-hidden /> As it is, it would suit {joinWords(outcome.fits.map((r) => r.name), 'or')}.
+          </p>
+        ) : (
+          <p className="font-bold text-brick-700" data-testid="self-check-problems">
+            As it is, none of the recipients collecting now would take it.
+            {outcome.nearly.length > 0 && ` A small fix at home would make it right for ${joinWords(outcome.nearly.map((r) => r.name), 'or')}.`}
+          </p>
+        ))}
+      {cautions.length > 0 && <Cautions cautions={cautions} compact />}
+    </section>
+  );
+}

@@ -1,0 +1,4 @@
+export const needKeys = {
+  all: ['needs'] as const,
+  list: () => [...needKeys.all, 'list'] as const,
+};
