@@ -110,11 +110,20 @@ test('a volunteer pledges, logs a blanket with a photo, fixes what the self-chec
   await expect(page.getByTestId('blanket-history')).toContainText('1 photo added');
   await shot(page, 'volunteer-blanket-detail');
 
+  // Book the drop-off: the maker says where, and the timeline moves on.
+  await page.getByRole('button', { name: 'Book a drop-off' }).click();
+  const booking = page.getByRole('form', { name: 'Book a drop-off' });
+  const where = booking.getByLabel('Where will you bring it?');
+  await where.selectOption((await where.locator('option', { hasText: 'Thimbleford Library' }).getAttribute('value'))!);
+  await booking.getByRole('button', { name: 'Book it' }).click();
+  await expect(page.getByText('Drop-off: Thimbleford Library')).toBeVisible();
+  await expect(page.getByTestId('blanket-history')).toContainText('Finished → Drop-off booked');
+
   // "My blankets" lists it with its code, in the table on a wide screen...
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My blankets' }).click();
   const row = page.getByTestId('blanket-row').filter({ hasText: code });
   await expect(row).toBeVisible();
-  await expect(row).toContainText('Finished');
+  await expect(row).toContainText('Drop-off booked');
   await page.getByLabel('Search').fill(code.slice(3));
   await expect(page.getByTestId('blanket-row')).toHaveCount(1);
   await page.getByLabel('Search').fill('');
@@ -151,4 +160,14 @@ test('the blanket log names what is wrong before anything is saved', async ({ pa
   await expect(page.getByText('Name at least one fibre')).toBeVisible();
   await expect(page).toHaveURL(/\/blankets\/new/);
   await shot(page, 'volunteer-log-errors');
+});
+
+test('a coordinator sees pledged against wanted, with over-pledging marked', async ({ page }) => {
+  await signIn(page, 'coordinator');
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'What’s needed' }).click();
+  const summary = page.getByRole('table', { name: 'Pledged against wanted' });
+  const hospiceLap = summary.getByRole('row').filter({ hasText: 'Kestrel Rise Hospice' }).filter({ hasText: 'Lap blanket' });
+  await expect(hospiceLap).toContainText('over');
+  await expect(summary.getByRole('row').filter({ hasText: 'All open needs' })).toBeVisible();
+  await shot(page, 'coordinator-needs');
 });

@@ -10,6 +10,7 @@ import { QueryError } from '@/components/ui/query-error';
 import { formatDay } from '@/components/ui/format-day';
 import { useMe } from '@/features/auth/api/get-me';
 import { pledgeKeys } from '@/features/pledges/api/keys';
+import { useSites } from '@/features/sites/api/get-sites';
 import { useBlanket } from '@/features/blankets/api/get-blanket';
 import { StatusTimeline } from '@/features/blankets/components/status-timeline';
 import { StatusBadge } from '@/features/blankets/components/status-badge';
@@ -72,6 +73,7 @@ export default function BlanketDetailPage() {
   const id = Number(useParams().id);
   const { data: user } = useMe();
   const blanket = useBlanket(id);
+  const sites = useSites('true');
   const location = useLocation();
   const qc = useQueryClient();
   const state = (location.state ?? {}) as LoggedState;
@@ -124,7 +126,10 @@ export default function BlanketDetailPage() {
           <StatusBadge status={b.status} />
         </div>
         <StatusTimeline status={b.status} />
-        <StatusActions blanket={b} onChanged={() => void qc.invalidateQueries({ queryKey: pledgeKeys.all })} />
+        <StatusActions blanket={b} sites={sites.data ?? []} onChanged={() => void qc.invalidateQueries({ queryKey: pledgeKeys.all })} />
+        {b.siteId && b.status === 'booked' && (
+          <p className="text-ink-soft">Drop-off: {sites.data?.find((s) => s.id === b.siteId)?.name ?? 'booked'}</p>
+        )}
       </Card>
 
       <div className="grid gap-6 lg:grid-cols-3">

@@ -13,6 +13,7 @@ import { useMe } from '@/features/auth/api/get-me';
 import { useNeeds } from '@/features/needs/api/get-needs';
 import { needKeys } from '@/features/needs/api/keys';
 import { RecipientNeeds } from '@/features/needs/components/recipient-needs';
+import { NeedsSummary } from '@/features/needs/components/needs-summary';
 import { PledgeForm } from '@/features/pledges/components/pledge-form';
 import type { OpenNeed, PledgeView, RecipientBrief } from '../../../../shared/schemas/pledge';
 
@@ -60,6 +61,14 @@ export default function NeedsPage() {
           <p className="text-lg">
             <strong>{wanted}</strong> blankets still wanted across {groups.length} recipients.
           </p>
+          {staff && needs.data.length > 0 && (
+            <section aria-labelledby="summary-title" className="space-y-3">
+              <h2 id="summary-title" className="text-2xl font-bold">
+                Pledged against wanted
+              </h2>
+              <NeedsSummary needs={needs.data} />
+            </section>
+          )}
           <Card className="space-y-3">
             <h2 className="flex items-center gap-2 text-2xl font-bold">
               <Sparkles className="size-6 text-marigold-700" aria-hidden /> Wherever it’s needed most
