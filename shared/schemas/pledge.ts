@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { SizeCategorySchema, type Population } from './blanket';
 import type { GuidelineSet } from './guidelines';
+import { IsoDaySchema } from './recipient';
 
 /** Most blankets one person promises in one pledge; past this it is a typing slip, not a plan. */
 export const MAX_PLEDGE_QUANTITY = 50;
@@ -10,15 +11,6 @@ export const MAX_PLEDGE_DAYS_AHEAD = 730;
 export const PLEDGE_STATUSES = ['active', 'cancelled', 'fulfilled'] as const;
 export const PledgeStatusSchema = z.enum(PLEDGE_STATUSES);
 export type PledgeStatus = z.infer<typeof PledgeStatusSchema>;
-
-/** A real calendar day written YYYY-MM-DD (2027-02-30 is refused, not rolled over). */
-export const IsoDaySchema = z
-  .string({ error: 'Give a date as YYYY-MM-DD' })
-  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Give a date as YYYY-MM-DD')
-  .refine((s) => {
-    const d = new Date(`${s}T00:00:00Z`);
-    return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
-  }, 'That date does not exist');
 
 const quantity = z
   .number({ error: 'Quantity must be a number' })

@@ -299,6 +299,18 @@ describe('PATCH /api/blankets/:id: the log', () => {
     expect(after!.version).toBe(b.version);
   });
 
+  it('records only the fields that changed when a form sends them all', async () => {
+    const p = await preemiePledge(vol, 1);
+    const b = await logBlanket(vol, p.id);
+    const res = await vol.patch(`/api/blankets/${b.id}`, { ...goodPreemie, yarnWeight: 2 });
+    expect(res.status).toBe(200);
+    const edit = (res.body.blanket as BlanketDetail).events.find((e) => e.kind === 'edited')!;
+    expect(edit.data).toMatchObject({ fields: ['yarnWeight'], before: { yarnWeight: 3 } });
+    const same = await vol.patch(`/api/blankets/${b.id}`, { ...goodPreemie, yarnWeight: 2 });
+    expect(same.status).toBe(200);
+    expect((same.body.blanket as BlanketDetail).events.filter((e) => e.kind === 'edited')).toHaveLength(1);
+  });
+
   it('refuses a stale version with 409', async () => {
     const p = await preemiePledge(vol, 1);
     const b = await logBlanket(vol, p.id);

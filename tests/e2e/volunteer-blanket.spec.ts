@@ -171,3 +171,19 @@ test('a coordinator sees pledged against wanted, with over-pledging marked', asy
   await expect(summary.getByRole('row').filter({ hasText: 'All open needs' })).toBeVisible();
   await shot(page, 'coordinator-needs');
 });
+
+test('the maker corrects the log of a blanket still on the hook, and the self-check passes again', async ({ page }) => {
+  await signIn(page, 'volunteer');
+  await page.goto('/blankets');
+  await page.getByRole('combobox', { name: 'Status' }).selectOption('in_progress');
+  await page.getByTestId('blanket-row').first().getByRole('link').click();
+  // The demo blanket on the hook is in worsted, heavier than the newborn unit takes.
+  await expect(page.getByTestId('self-check-problems')).toContainText('yarn weight 4');
+  await page.getByRole('link', { name: 'Correct the log' }).click();
+  await page.getByLabel('Yarn weight').selectOption('3');
+  await expect(page.getByTestId('self-check-ok')).toBeVisible();
+  await page.getByRole('button', { name: 'Save the changes' }).click();
+  await expect(page.getByRole('heading', { level: 1 })).toContainText('Blanket KL-');
+  await expect(page.getByTestId('self-check-ok')).toBeVisible();
+  await expect(page.getByTestId('blanket-history')).toContainText('Log corrected (1 field)');
+});

@@ -255,12 +255,14 @@ export async function updateBlanket(actor: Actor, id: number, body: BlanketUpdat
     ]);
   }
   const isMaker = b.userId === actor.id;
-  const changed = LOG_FIELDS.filter((f) => body[f] !== undefined);
+  const sent = LOG_FIELDS.filter((f) => body[f] !== undefined);
+  // A form sends every field; only the ones that differ are a correction worth recording.
+  const changed = sent.filter((f) => JSON.stringify(b.get(f)) !== JSON.stringify(body[f]));
   const wantsSite = body.siteId !== undefined;
   if (body.reason !== undefined && body.status === undefined) {
     throw fieldError(400, 'reason', 'reason: a reason goes with a status change');
   }
-  if (changed.length === 0 && !wantsSite && body.status === undefined) {
+  if (sent.length === 0 && !wantsSite && body.status === undefined) {
     throw new HttpError(400, 'Nothing to change: send a field of the log, a siteId or a status');
   }
 

@@ -1,20 +1,12 @@
 import type { Transaction } from 'sequelize';
 import { Recipient } from '../../db/models/recipient';
-import { GuidelineSetSchema, type GuidelineSet } from '../../../shared/schemas/guidelines';
 import type { RecipientBrief } from '../../../shared/schemas/pledge';
-import { defaultGuidelines } from '../../../shared/guidelines/defaults';
 import { describeGuidelines } from '../../../shared/guidelines/describe';
 import { cautionsFor } from '../../../shared/guidelines/cautions';
+import { storedGuidelines } from '../recipients/recipients.service';
 
-/**
- * A recipient's guideline set as stored. A row saved before its guidelines were filled in (or
- * with a set that no longer parses) falls back to its population's defaults, so a maker still
- * gets a self-check rather than none.
- */
-export function guidelinesOf(r: Pick<Recipient, 'guidelines' | 'population'>): GuidelineSet {
-  const parsed = GuidelineSetSchema.safeParse(r.guidelines);
-  return parsed.success ? parsed.data : defaultGuidelines(r.population);
-}
+/** A recipient's stored guideline set, read the way the recipients area reads it (defaults when it no longer parses). */
+export const guidelinesOf = storedGuidelines;
 
 export function recipientBrief(r: Recipient): RecipientBrief {
   const guidelines = guidelinesOf(r);
