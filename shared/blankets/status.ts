@@ -26,6 +26,11 @@ export interface StatusMove {
   by: readonly Mover[];
   /** The button text for this move, in the mover's words. */
   action: string;
+  /**
+   * 'intake': made only through the intake and inspection steps, which record the re-measure,
+   * the checklist and the guideline check that justify it, never by a bare status change.
+   */
+  via?: 'intake';
 }
 
 const STAFF: readonly Mover[] = ['organiser', 'coordinator'];
@@ -35,14 +40,14 @@ const DELIVERY: readonly Mover[] = ['coordinator'];
 export const STATUS_MOVES: readonly StatusMove[] = [
   { from: 'in_progress', to: 'finished', direction: 'forward', by: MAKER, action: 'Mark as finished' },
   { from: 'finished', to: 'booked', direction: 'forward', by: MAKER, action: 'Book a drop-off' },
-  { from: 'booked', to: 'received', direction: 'forward', by: STAFF, action: 'Mark as received' },
+  { from: 'booked', to: 'received', direction: 'forward', by: STAFF, action: 'Mark as received', via: 'intake' },
   // Booking is a courtesy, not a gate: a maker may walk in with a finished blanket.
-  { from: 'finished', to: 'received', direction: 'forward', by: STAFF, action: 'Received without a booking' },
-  { from: 'received', to: 'checked', direction: 'forward', by: STAFF, action: 'Passed the check' },
-  { from: 'received', to: 'needs_fix', direction: 'forward', by: STAFF, action: 'Needs a fix' },
-  { from: 'received', to: 'declined', direction: 'forward', by: STAFF, action: 'Decline' },
+  { from: 'finished', to: 'received', direction: 'forward', by: STAFF, action: 'Received without a booking', via: 'intake' },
+  { from: 'received', to: 'checked', direction: 'forward', by: STAFF, action: 'Passed the check', via: 'intake' },
+  { from: 'received', to: 'needs_fix', direction: 'forward', by: STAFF, action: 'Needs a fix', via: 'intake' },
+  { from: 'received', to: 'declined', direction: 'forward', by: STAFF, action: 'Decline', via: 'intake' },
   // After a fix: either the organisers mend it on the spot, or the maker takes it home and books it again.
-  { from: 'needs_fix', to: 'received', direction: 'forward', by: STAFF, action: 'Fixed: check it again' },
+  { from: 'needs_fix', to: 'received', direction: 'forward', by: STAFF, action: 'Fixed: check it again', via: 'intake' },
   { from: 'needs_fix', to: 'finished', direction: 'forward', by: MAKER, action: 'I have fixed it at home' },
   { from: 'checked', to: 'assigned', direction: 'forward', by: STAFF, action: 'Assign to a recipient' },
   { from: 'assigned', to: 'packed', direction: 'forward', by: STAFF, action: 'Mark as packed' },
@@ -98,6 +103,9 @@ export function findMove(from: BlanketStatus, to: BlanketStatus): StatusMove | u
 export function mayMove(move: StatusMove, actor: StatusActor): boolean {
   return move.by.some((m) => (m === 'maker' ? actor.isMaker : m === actor.role));
 }
+
+/** Whether a move belongs to intake (receive, inspect) rather than to a plain status change. */
+export const isIntakeMove = (move: StatusMove): boolean => move.via === 'intake';
 
 /** The moves this person can make from here, forward ones first. */
 export function movesFrom(from: BlanketStatus, actor: StatusActor): StatusMove[] {

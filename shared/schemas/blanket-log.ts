@@ -202,5 +202,7 @@ export interface BlanketDetail extends BlanketSummary {
   fitsRecipients: Array<{ recipientId: number; name: string }>;
   cautions: Caution[];
   moves: MoveView[];
+  /** True when this person's next step is receiving or inspecting it, which happens on the intake page. */
+  atIntake: boolean;
   editable: boolean;
 }

@@ -340,14 +340,40 @@ describe('PATCH /api/blankets/:id: the log', () => {
     const p = await preemiePledge(vol, 1);
     const b = await logBlanket(vol, p.id, { status: 'finished' });
     await vol.patch(`/api/blankets/${b.id}`, { status: 'booked' });
-    expect((await organiser.patch(`/api/blankets/${b.id}`, { status: 'received' })).status).toBe(200);
+    expect((await moveTo(organiser, b.id, 'received')).status).toBe(200);
     const res = await vol.patch(`/api/blankets/${b.id}`, { widthCm: 44 });
     expect(res.status).toBe(409);
     expect(res.body.error.message).toMatch(/organisers/);
   });
 });
 
+const ALL_GOOD = { endsWovenIn: true, noFingertipHoles: true, nothingLoose: true, clean: true, noSmokeOrPetOdour: true, matchesLog: true };
+
+/** Receiving and inspecting go through intake, which records the re-measure and the check; the rest is a status change. */
+async function moveTo(who: Client, id: number, status: string) {
+  if (status === 'received') {
+    const site = ((await who.get('/api/sites')).body.sites as Array<{ id: number }>)[0]!;
+    const b = (await Blanket.findByPk(id))!;
+    return who.post(`/api/blankets/${id}/intake`, { siteId: site.id, widthCm: b.widthCm, lengthCm: b.lengthCm });
+  }
+  if (status === 'checked') return who.post(`/api/blankets/${id}/inspection`, { checklist: ALL_GOOD, outcome: 'checked' });
+  return who.patch(`/api/blankets/${id}`, { status });
+}
+
 describe('PATCH /api/blankets/:id: status moves', () => {
+  it('refuses receiving or inspecting by a bare status change: those go through intake (409)', async () => {
+    const p = await preemiePledge(vol, 1);
+    const b = await logBlanket(vol, p.id, { status: 'finished' });
+    await vol.patch(`/api/blankets/${b.id}`, { status: 'booked' });
+    const res = await organiser.patch(`/api/blankets/${b.id}`, { status: 'received' });
+    expect(res.status).toBe(409);
+    expect(res.body.error.issues[0].path).toBe('status');
+    expect((await Blanket.findByPk(b.id))!.status).toBe('booked');
+    const detail = (await organiser.get(`/api/blankets/${b.id}`)).body.blanket as BlanketDetail;
+    expect(detail.moves.map((m) => m.to)).not.toContain('received');
+    expect(detail.atIntake).toBe(true);
+  });
+
   it('takes a blanket from the hook to delivery, each step by the right person, recorded with who and when', async () => {
     const p = await preemiePledge(vol, 1);
     const b = await logBlanket(vol, p.id);
@@ -361,12 +387,12 @@ describe('PATCH /api/blankets/:id: status moves', () => {
       [coordinator, 'delivered'],
     ];
     for (const [who, status] of steps) {
-      const res = await who.patch(`/api/blankets/${b.id}`, { status });
+      const res = await moveTo(who, b.id, status);
       expect(res.status, `${status}: ${JSON.stringify(res.body)}`).toBe(200);
-      expect(res.body.blanket.status).toBe(status);
+      expect((await Blanket.findByPk(b.id))!.status).toBe(status);
     }
     const detail = (await vol.get(`/api/blankets/${b.id}`)).body.blanket as BlanketDetail;
-    const moves = detail.events.filter((e) => e.kind === 'status');
+    const moves = detail.events.filter((e) => ['status', 'intake', 'inspection'].includes(e.kind));
     expect(moves.map((e) => [e.fromStatus, e.toStatus, e.actor?.name])).toEqual([
       ['in_progress', 'finished', 'Wren Calloway'],
       ['finished', 'booked', 'Wren Calloway'],
@@ -411,8 +437,8 @@ describe('PATCH /api/blankets/:id: status moves', () => {
     const own = await vol.patch(`/api/blankets/${b.id}`, { status: 'received' });
     expect(own.status).toBe(403);
     expect(own.body.error.message).toMatch(/organisers/);
-    await organiser.patch(`/api/blankets/${b.id}`, { status: 'received' });
-    await organiser.patch(`/api/blankets/${b.id}`, { status: 'checked' });
+    await moveTo(organiser, b.id, 'received');
+    await moveTo(organiser, b.id, 'checked');
     await organiser.patch(`/api/blankets/${b.id}`, { status: 'assigned' });
     await organiser.patch(`/api/blankets/${b.id}`, { status: 'packed' });
     expect((await organiser.patch(`/api/blankets/${b.id}`, { status: 'delivered' })).status).toBe(403);
@@ -437,7 +463,10 @@ describe('PATCH /api/blankets/:id: status moves', () => {
     const mine = (await vol.get(`/api/blankets/${booked.id}`)).body.blanket as BlanketDetail;
     expect(mine.moves).toEqual([{ to: 'finished', direction: 'back', action: expect.any(String) }]);
     const theirs = (await organiser.get(`/api/blankets/${booked.id}`)).body.blanket as BlanketDetail;
-    expect(theirs.moves.map((m) => m.to)).toEqual(['received']);
+    // Receiving it is the organisers' next step, taken on the intake page rather than by a button here.
+    expect(theirs.moves.map((m) => m.to)).toEqual([]);
+    expect(theirs.atIntake).toBe(true);
+    expect(mine.atIntake).toBe(false);
     expect(theirs.editable).toBe(false);
   });
 });

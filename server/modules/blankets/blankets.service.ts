@@ -20,7 +20,7 @@ import {
   type BlanketUpdate,
   type PhotoView,
 } from '../../../shared/schemas/blanket-log';
-import { checkTransition, isMakerEditable, movesFrom, type TransitionRefusal } from '../../../shared/blankets/status';
+import { checkTransition, isIntakeMove, isMakerEditable, movesFrom, type TransitionRefusal } from '../../../shared/blankets/status';
 import { check, evaluate, type OtherRecipient } from '../../../shared/guidelines/check';
 import { activeRecipients, guidelinesOf, recipientBrief } from '../pledges/recipient-brief';
 import { readsAll, refreshPledgeStatus, type Actor } from '../pledges/pledges.service';
@@ -173,7 +173,11 @@ export async function blanketDetail(actor: Actor, id: number, transaction?: Tran
     selfCheck,
     fitsRecipients,
     cautions: brief?.cautions ?? [],
-    moves: movesFrom(b.status, { role: actor.role, isMaker }).map((m) => ({ to: m.to, direction: m.direction, action: m.action })),
+    // Receiving and inspecting happen on the intake page, where the check is recorded with them.
+    moves: movesFrom(b.status, { role: actor.role, isMaker })
+      .filter((m) => !isIntakeMove(m))
+      .map((m) => ({ to: m.to, direction: m.direction, action: m.action })),
+    atIntake: movesFrom(b.status, { role: actor.role, isMaker }).some(isIntakeMove),
     editable: isMaker && isMakerEditable(b.status),
   };
 }
@@ -235,6 +239,9 @@ export async function moveBlanketStatus(
   if (!verdict.ok) {
     const path = verdict.refusal === 'reason' ? 'reason' : 'status';
     throw fieldError(REFUSAL_STATUS[verdict.refusal], path, `${path}: ${verdict.message}`);
+  }
+  if (isIntakeMove(verdict.move)) {
+    throw fieldError(409, 'status', 'status: receive and inspect blankets on the intake page, where the measurements, checklist and check are recorded with the move');
   }
   const from = b.status;
   b.status = to;

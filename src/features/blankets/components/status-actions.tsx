@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Button } from '@/components/ui/button';
+import { Button, ButtonLink } from '@/components/ui/button';
 import { Field, Select, Textarea } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { serverFieldErrors } from '@/components/ui/form-errors';
@@ -23,7 +23,7 @@ export function StatusActions({ blanket, sites = [], onChanged }: { blanket: Bla
   const [booking, setBooking] = useState<MoveView | null>(null);
   const [reason, setReason] = useState('');
   const [siteId, setSiteId] = useState<string>(blanket.siteId ? String(blanket.siteId) : '');
-  if (blanket.moves.length === 0) return null;
+  if (blanket.moves.length === 0 && !blanket.atIntake) return null;
   const move = (m: MoveView, extra: { reason?: string; siteId?: number } = {}) =>
     update.mutate(
       { id: blanket.id, version: blanket.version, status: m.to, ...extra },
@@ -44,6 +44,9 @@ export function StatusActions({ blanket, sites = [], onChanged }: { blanket: Bla
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap gap-2">
+        {blanket.atIntake && (
+          <ButtonLink to={`/organiser/intake?code=${encodeURIComponent(blanket.code)}`}>Receive or inspect at intake</ButtonLink>
+        )}
         {blanket.moves.map((m) => (
           <Button key={m.to} variant={m.direction === 'forward' ? 'primary' : 'secondary'} busy={update.isPending && update.variables?.status === m.to} onClick={() => choose(m)}>
             {m.action}
