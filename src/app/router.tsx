@@ -49,6 +49,7 @@ export const routes = [
   { path: 'blankets/new', ...guarded(() => import('./routes/volunteer/log-blanket')) },
   { path: 'blankets/:id', ...guarded(() => import('./routes/volunteer/blanket-detail')) },
   { path: 'blankets/:id/edit', ...guarded(() => import('./routes/volunteer/edit-blanket')) },
+  { path: 'all-blankets', ...guarded(() => import('./routes/organiser/all-blankets'), ['organiser', 'coordinator']) },
   // Feature pages are added above this line.
   { path: '*', ...page(() => import('./routes/not-found')) },
 ];

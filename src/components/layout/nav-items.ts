@@ -19,6 +19,7 @@ export const navItems: NavItem[] = [
   { to: '/pledges', label: 'My pledges', icon: ClipboardList, roles: ['volunteer'] },
   { to: '/blankets', label: 'My blankets', icon: Layers, roles: ['volunteer'] },
   { to: '/organiser/intake', label: 'Intake', icon: ScanLine, roles: ['organiser', 'coordinator'] },
+  { to: '/all-blankets', label: 'Blankets', icon: Layers, roles: ['organiser', 'coordinator'] },
   { to: '/recipients', label: 'Recipients', icon: HeartHandshake, roles: ['organiser', 'coordinator'] },
   { to: '/sites', label: 'Sites', icon: MapPin, roles: ['coordinator'] },
   { to: '/people', label: 'People', icon: Users, roles: ['coordinator'] },

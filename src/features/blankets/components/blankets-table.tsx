@@ -30,6 +30,8 @@ const STATUS_RANK: Record<BlanketStatus, number> = Object.fromEntries(
 const col = createColumnHelper<BlanketSummary>();
 const size = (b: BlanketSummary) => `${formatCm(b.widthCm)} × ${formatCm(b.lengthCm)} cm`;
 
+const makerColumn = col.accessor('makerName', { header: 'Maker', cell: (c) => c.getValue() || '—' });
+
 const columns = [
   col.accessor('code', {
     header: 'Code',
@@ -102,14 +104,16 @@ const PAGE_SIZES = [10, 25, 50];
  * "My blankets": sortable, filterable and paged. A table on wide screens, cards on phones, both
  * drawn from the same rows so a filter or a page applies to whichever you see.
  */
-export function BlanketsTable({ blankets }: { blankets: BlanketSummary[] }) {
+export function BlanketsTable({ blankets, showMaker = false }: { blankets: BlanketSummary[]; showMaker?: boolean }) {
+  // Staff see everyone's blankets, so who made each one is a column of its own.
+  const visibleColumns = useMemo(() => (showMaker ? [columns[0]!, makerColumn, ...columns.slice(1)] : columns), [showMaker]);
   const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);
   const [globalFilter, setGlobalFilter] = useState('');
   const [status, setStatus] = useState<BlanketStatus | ''>('');
   const columnFilters = useMemo(() => (status ? [{ id: 'status', value: status }] : []), [status]);
   const table = useReactTable({
     data: blankets,
-    columns,
+    columns: visibleColumns,
     state: { sorting, globalFilter, columnFilters },
     onSortingChange: setSorting,
     onGlobalFilterChange: setGlobalFilter,
