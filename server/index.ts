@@ -33,7 +33,7 @@ async function main() {
   initModels(sequelize);
   await migrate(sequelize);
   if (config.seedDemo && (await isEmpty())) {
-    await seedDemo(sequelize, config.demoPassword, config.scryptLogN);
+    await seedDemo(sequelize, config.demoPassword, config.scryptLogN, new Date(), { uploadDir: config.uploadDir });
     console.log('Seeded the demo drive (accounts: volunteer@, organiser@, coordinator@example.org)');
   }
   if (!config.smtpUrl) {

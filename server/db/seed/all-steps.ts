@@ -7,3 +7,5 @@ import './recipients';
 
 export {};
 import './volunteering';
+// Photos last: they picture the blankets the steps above made.
+import './photos';

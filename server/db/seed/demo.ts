@@ -30,7 +30,7 @@ export function addSeedStep(step: Step) {
   steps.push(step);
 }
 
-export async function seedDemo(sequelize: Sequelize, password: string, logN: number, today = new Date()) {
+export async function seedDemo(sequelize: Sequelize, password: string, logN: number, today = new Date(), opts: { uploadDir?: string } = {}) {
   // One hash for every demo account: the password is the same and hashing 15 times at N=2^17 is slow.
   const passwordHash = await hashPassword(password, logN);
   await sequelize.transaction(async (transaction) => {
@@ -60,6 +60,7 @@ export async function seedDemo(sequelize: Sequelize, password: string, logN: num
       transaction,
       today,
       passwordHash,
+      uploadDir: opts.uploadDir,
       users: { volunteer, organiser, coordinator, volunteers },
       ids: {},
     };

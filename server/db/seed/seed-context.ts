@@ -8,6 +8,8 @@ export interface SeedContext {
   today: Date;
   passwordHash: string;
   users: { volunteer: User; organiser: User; coordinator: User; volunteers: User[] };
+  /** Where demo photos go; unset (as in most tests) means the demo has no photos. */
+  uploadDir?: string;
   /** Ids created by earlier steps, for later steps to refer to. */
   ids: Record<string, number[]>;
 }
