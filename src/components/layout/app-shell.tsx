@@ -23,12 +23,12 @@ export function AppShell() {
         Skip to content
       </a>
       <header className="no-print border-b border-oat-200 bg-white">
-        <div className="mx-auto flex max-w-6xl items-center gap-4 px-4 py-3">
+        <div className="mx-auto flex max-w-6xl items-center gap-2 px-4 py-3 sm:gap-4">
           <Link to={user ? '/home' : '/'} className="flex items-center gap-2 text-2xl font-bold text-heather-800 no-underline">
             <Logo />
             Kindloop
           </Link>
-          <div className="ml-auto flex items-center gap-3">
+          <div className="ml-auto flex items-center gap-2 sm:gap-3">
             {user ? (
               <>
                 <span className="hidden text-right text-sm leading-tight sm:block" data-testid="whoami">
@@ -40,7 +40,7 @@ export function AppShell() {
                   className="flex min-h-11 items-center gap-2 whitespace-nowrap rounded-xl border-2 border-oat-300 px-3 py-2 font-bold hover:bg-oat-100"
                   onClick={() => logout.mutate(undefined, { onSuccess: () => navigate('/') })}
                 >
-                  <LogOut className="size-5" aria-hidden /> Sign out
+                  <LogOut className="size-5" aria-hidden /> <span className="sr-only sm:not-sr-only">Sign out</span>
                 </button>
               </>
             ) : (
