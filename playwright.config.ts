@@ -4,6 +4,8 @@ const port = Number(process.env.E2E_PORT ?? 3310);
 
 export default defineConfig({
   testDir: 'tests/e2e',
+  // Its own folder: Playwright empties outputDir at start, and test-results/ also holds the Vitest report.
+  outputDir: 'test-results/playwright',
   timeout: 60_000,
   expect: { timeout: 10_000 },
   fullyParallel: false,
