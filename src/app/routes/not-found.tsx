@@ -4,7 +4,7 @@ import { ButtonLink } from '@/components/ui/button';
 
 export default function NotFoundPage() {
   return (
-    <EmptyState icon={MapPinOff} title="We can't find that page" action={<ButtonLink to="/">Back to the start</ButtonLink>}>
+    <EmptyState as="h1" icon={MapPinOff} title="We can't find that page" action={<ButtonLink to="/">Back to the start</ButtonLink>}>
       The link may be old, or the page may have moved. Nothing you made is lost.
     </EmptyState>
   );

@@ -14,7 +14,7 @@ export function RequireRole({ roles, children }: { roles?: Role[]; children: Rea
   if (!user) return <Navigate to={`/sign-in?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
   if (roles && !roles.includes(user.role)) {
     return (
-      <EmptyState icon={Lock} title="This page is for another role">
+      <EmptyState as="h1" icon={Lock} title="This page is for another role">
         Your account can't open this page. If you think it should, ask the drive's coordinator.
       </EmptyState>
     );

@@ -2,7 +2,7 @@ import { forwardRef, type ButtonHTMLAttributes } from 'react';
 import { Link, type LinkProps } from 'react-router-dom';
 import { cn } from './cn';
 
-type Variant = 'primary' | 'secondary' | 'quiet' | 'danger';
+type Variant = 'primary' | 'secondary' | 'quiet' | 'danger' | 'accent';
 type Size = 'md' | 'lg' | 'sm';
 
 const base =
@@ -12,6 +12,8 @@ const variants: Record<Variant, string> = {
   secondary: 'bg-white text-heather-800 border-2 border-heather-300 hover:bg-heather-50 hover:text-heather-800',
   quiet: 'bg-transparent text-heather-800 hover:bg-heather-50 hover:text-heather-800',
   danger: 'bg-brick-700 text-white hover:bg-brick-500 hover:text-white',
+  /** Marigold with dark text, for the one call to action on a dark panel. */
+  accent: 'bg-marigold-400 text-ink hover:bg-marigold-300 hover:text-ink shadow-sm',
 };
 const sizes: Record<Size, string> = { sm: 'px-3 py-1.5 text-sm min-h-9', md: 'px-4 py-2', lg: 'px-6 py-3 text-lg' };
 

@@ -32,11 +32,11 @@ export default function HomePage() {
           )}
           <div className="mt-6 flex flex-wrap gap-3">
             {user ? (
-              <ButtonLink to="/home" size="lg" className="bg-marigold-400 text-ink hover:bg-marigold-300 hover:text-ink">
+              <ButtonLink to="/home" size="lg" variant="accent">
                 Go to your page
               </ButtonLink>
             ) : (
-              <ButtonLink to="/register" size="lg" className="bg-marigold-400 text-ink hover:bg-marigold-300 hover:text-ink">
+              <ButtonLink to="/register" size="lg" variant="accent">
                 Join as a maker
               </ButtonLink>
             )}
