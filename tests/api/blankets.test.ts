@@ -14,6 +14,7 @@ import { check } from '../../shared/guidelines/check';
 import { CODE_ALPHABET, CODE_PREFIX, isBlanketCode } from '../../shared/blankets/code';
 import type { BlanketDetail, BlanketSummary } from '../../shared/schemas/blanket-log';
 import type { PledgeView } from '../../shared/schemas/pledge';
+import { allGoodChecklist as ALL_GOOD } from '../fixtures/blankets';
 
 let t: TestApp;
 let vol: Client;
@@ -346,8 +347,6 @@ describe('PATCH /api/blankets/:id: the log', () => {
     expect(res.body.error.message).toMatch(/organisers/);
   });
 });
-
-const ALL_GOOD = { endsWovenIn: true, noFingertipHoles: true, nothingLoose: true, clean: true, noSmokeOrPetOdour: true, matchesLog: true };
 
 /** Receiving and inspecting go through intake, which records the re-measure and the check; the rest is a status change. */
 async function moveTo(who: Client, id: number, status: string) {

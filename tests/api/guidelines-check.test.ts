@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Client, makeTestApp, signedIn, type TestApp } from './test-app';
 import { Recipient } from '../../server/db/models/recipient';
+import { plainBlanket } from '../fixtures/blankets';
 
 let t: TestApp;
 let volunteer: Client;
@@ -13,20 +14,8 @@ beforeAll(async () => {
 });
 afterAll(async () => t.close());
 
-/** A crib-sized acrylic blanket as a maker would log it. */
-const crib = (over: object = {}) => ({
-  widthCm: 80,
-  lengthCm: 100,
-  yarnWeight: 4,
-  fibres: ['acrylic'],
-  features: [],
-  machineWashable: true,
-  dryerSafe: true,
-  smokeFree: true,
-  petFree: true,
-  newYarn: true,
-  ...over,
-});
+/** A crib-sized acrylic blanket as a maker would log it; `over` may hold bad values on purpose. */
+const crib = (over: object = {}) => ({ ...plainBlanket(), ...over });
 
 describe('POST /api/guidelines/check', () => {
   it('passes a clean crib blanket for the family shelter, with the infant cautions and the facility line', async () => {

@@ -3,31 +3,12 @@ import fc from 'fast-check';
 import { suggestOutcome, CHECKLIST_ITEMS, type Checklist } from '../../shared/schemas/intake';
 import { check } from '../../shared/guidelines/check';
 import { defaultGuidelines } from '../../shared/guidelines/defaults';
-import type { BlanketFields } from '../../shared/schemas/blanket';
+import { allGoodChecklist as allGood, plainBlanket } from '../fixtures/blankets';
 
-const allGood: Checklist = {
-  endsWovenIn: true,
-  noFingertipHoles: true,
-  nothingLoose: true,
-  clean: true,
-  noSmokeOrPetOdour: true,
-  matchesLog: true,
-};
 const infant = defaultGuidelines('infant');
 const child = defaultGuidelines('child');
 const adult = defaultGuidelines('adult');
-const crib: BlanketFields = {
-  widthCm: 85,
-  lengthCm: 105,
-  yarnWeight: 4,
-  fibres: ['acrylic'],
-  features: [],
-  machineWashable: true,
-  dryerSafe: true,
-  smokeFree: true,
-  petFree: true,
-  newYarn: true,
-};
+const crib = plainBlanket({ widthCm: 85, lengthCm: 105 });
 const others = [{ recipientId: 2, name: 'Ward', guidelines: child }];
 
 describe('the outcome the intake table suggests', () => {

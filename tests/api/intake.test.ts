@@ -9,7 +9,7 @@ import { Site } from '../../server/db/models/site';
 import { User } from '../../server/db/models/user';
 import type { BlanketStatus } from '../../shared/schemas/blanket';
 import { codeFromBytes } from '../../shared/blankets/code';
-import type { Checklist } from '../../shared/schemas/intake';
+import { allGoodChecklist as allGood, plainBlanket } from '../fixtures/blankets';
 
 let t: TestApp;
 let organiser: Client;
@@ -36,28 +36,10 @@ async function blanket(over: Partial<Record<keyof BlanketAttributes, unknown>> =
     userId: maker.id,
     recipientId: rid['family-shelter'],
     status: 'finished',
-    widthCm: 80,
-    lengthCm: 100,
-    yarnWeight: 4,
-    fibres: ['acrylic'],
-    features: [],
-    machineWashable: true,
-    dryerSafe: true,
-    smokeFree: true,
-    petFree: true,
-    newYarn: true,
+    ...plainBlanket(),
     ...over,
   } as unknown as BlanketAttributes);
 }
-
-const allGood: Checklist = {
-  endsWovenIn: true,
-  noFingertipHoles: true,
-  nothingLoose: true,
-  clean: true,
-  noSmokeOrPetOdour: true,
-  matchesLog: true,
-};
 
 async function received(over: Partial<Record<keyof BlanketAttributes, unknown>> = {}) {
   const b = await blanket(over);

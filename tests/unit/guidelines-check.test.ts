@@ -3,41 +3,11 @@ import type { BlanketFields } from '../../shared/schemas/blanket';
 import { GuidelineCheckResultSchema, type GuidelineSet } from '../../shared/schemas/guidelines';
 import { check, REMOVABLE_FEATURES } from '../../shared/guidelines/check';
 import { defaultGuidelines } from '../../shared/guidelines/defaults';
+import { plainBlanket } from '../fixtures/blankets';
+import { roundWard as ward } from '../fixtures/guidelines';
 
-/** A set with round numbers so the boundaries in these tests are easy to read. */
-const ward = (over: Partial<GuidelineSet> = {}): GuidelineSet => ({
-  population: 'preemie',
-  minWidthCm: 40,
-  maxWidthCm: 55,
-  minLengthCm: 40,
-  maxLengthCm: 55,
-  toleranceUnit: 'cm',
-  toleranceValue: 2,
-  yarnWeights: [2, 3, 4],
-  acceptedFibres: ['acrylic', 'cotton'],
-  refusedFibres: ['wool', 'mohair', 'alpaca'],
-  refusedFeatures: ['fringe', 'tassels', 'pompoms', 'buttons', 'beads', 'applique', 'ribbons', 'open-lace'],
-  requireMachineWashable: true,
-  requireDryerSafe: true,
-  requireSmokeFree: true,
-  requirePetFree: true,
-  requireNewYarn: true,
-  ...over,
-});
-
-const good = (over: Partial<BlanketFields> = {}): BlanketFields => ({
-  widthCm: 45,
-  lengthCm: 50,
-  yarnWeight: 3,
-  fibres: ['acrylic'],
-  features: [],
-  machineWashable: true,
-  dryerSafe: true,
-  smokeFree: true,
-  petFree: true,
-  newYarn: true,
-  ...over,
-});
+/** A preemie-sized blanket in light yarn that meets every rule of the round-numbered ward. */
+const good = (over: Partial<BlanketFields> = {}): BlanketFields => plainBlanket({ widthCm: 45, lengthCm: 50, yarnWeight: 3, ...over });
 
 const rules = (b: BlanketFields, g: GuidelineSet) => check(b, g).reasons.map((r) => r.rule);
 

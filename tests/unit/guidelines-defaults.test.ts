@@ -5,23 +5,12 @@ import { check } from '../../shared/guidelines/check';
 import { defaultGuidelines } from '../../shared/guidelines/defaults';
 import { sizeCategoryRow } from '../../shared/guidelines/size-categories';
 import type { SizeCategory } from '../../shared/schemas/blanket';
+import { plainBlanket } from '../fixtures/blankets';
 
 /** A blanket of the category's nominal size, plain acrylic, from a smoke- and pet-free home. */
 const nominal = (category: SizeCategory, over: Partial<BlanketFields> = {}): BlanketFields => {
   const row = sizeCategoryRow(category);
-  return {
-    widthCm: row.nominalCm.width,
-    lengthCm: row.nominalCm.length,
-    yarnWeight: 4,
-    fibres: ['acrylic'],
-    features: [],
-    machineWashable: true,
-    dryerSafe: true,
-    smokeFree: true,
-    petFree: true,
-    newYarn: true,
-    ...over,
-  };
+  return plainBlanket({ widthCm: row.nominalCm.width, lengthCm: row.nominalCm.length, ...over });
 };
 
 describe('defaultGuidelines', () => {
