@@ -32,7 +32,7 @@ function outcomeOf(b: BlanketDetail): SelfCheck {
 
 const yes = (v: boolean) => (v ? 'Yes' : 'No');
 
-function Details({ b }: { b: BlanketDetail }) {
+function Details({ b, isMaker }: { b: BlanketDetail; isMaker: boolean }) {
   const rows: Array<[string, string]> = [
     ['Size', `${formatCm(b.widthCm)} × ${formatCm(b.lengthCm)} cm (about ${formatIn(b.widthCm)} × ${formatIn(b.lengthCm)} in)`],
     ['Pledged as', sizeLabel(b.sizeCategory)],
@@ -58,6 +58,15 @@ function Details({ b }: { b: BlanketDetail }) {
           <dd className="mb-2 sm:mb-0">{v}</dd>
         </div>
       ))}
+      {b.planId !== null && isMaker && (
+        <div className="contents">
+          <dt className="font-bold">Plan</dt>
+          {/* Saved plans are the maker's own, so only the maker gets the link. */}
+          <dd className="mb-2 sm:mb-0">
+            <Link to={`/planner?plan=${b.planId}`}>Open the saved plan in the planner</Link>
+          </dd>
+        </div>
+      )}
       {b.notes && (
         <div className="contents">
           <dt className="font-bold">Notes</dt>
@@ -140,7 +149,7 @@ export default function BlanketDetailPage() {
           </Card>
           <Card>
             <CardTitle>Details</CardTitle>
-            <Details b={b} />
+            <Details b={b} isMaker={isMaker} />
           </Card>
         </div>
         <div className="space-y-6">
