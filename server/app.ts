@@ -73,6 +73,20 @@ export function createApp(deps: AppDeps): KindloopApp {
       },
     }),
   );
+  // The store only sweeps expired rows every quarter hour and a copied cookie can be replayed, so
+  // the idle limit is enforced here too (OWASP Session Management: idle timeouts on the server).
+  const idleMs = config.sessionIdleMinutes * 60_000;
+  app.use('/api', (req, _res, next) => {
+    const now = Date.now();
+    const last = req.session.lastSeen;
+    if (last !== undefined && now - last > idleMs) {
+      return req.session.regenerate((err) => next(err));
+    }
+    // Only sessions that hold something are stamped; an anonymous GET creates no row.
+    const held = req.session as typeof req.session & { passport?: { user?: number } };
+    if (held.passport?.user !== undefined || held.csrfToken) req.session.lastSeen = now;
+    next();
+  });
   app.use('/api', passport.initialize());
   app.use('/api', passport.session());
   app.use('/api', csrfProtection);

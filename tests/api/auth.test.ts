@@ -173,3 +173,18 @@ describe('people and roles', () => {
     expect(res.body.error.issues[0].path).toBe('role');
   });
 });
+
+describe('idle sessions', () => {
+  it('ends a session left unused longer than SESSION_IDLE_MINUTES, even if its cookie is replayed', async () => {
+    const c = await signedIn(t.app, 'priya@example.org');
+    expect((await c.get('/api/auth/me')).status).toBe(200);
+    const { Session } = await import('../../server/db/models/session');
+    const priya = (await User.findOne({ where: { email: 'priya@example.org' } }))!;
+    const mine = (await Session.findAll()).find((r) => r.userId === priya.id);
+    expect(mine).toBeTruthy();
+    const data = JSON.parse(mine!.data!);
+    data.lastSeen = Date.now() - (t.config.sessionIdleMinutes + 1) * 60_000;
+    await mine!.update({ data: JSON.stringify(data) });
+    expect((await c.get('/api/auth/me')).status).toBe(401);
+  });
+});
