@@ -107,3 +107,22 @@ export const BlanketFieldsSchema = z.object({
   newYarn: z.boolean().default(true),
 });
 export type BlanketFields = z.infer<typeof BlanketFieldsSchema>;
+
+/**
+ * Only the guideline-check fields of a stored blanket or a view of one, so a check never sees the
+ * rest of the row. The types stay the source's own: a view may carry fibres as plain strings.
+ */
+export function pickBlanketFields<T extends Record<keyof BlanketFields, unknown>>(b: T): Pick<T, keyof BlanketFields> {
+  return {
+    widthCm: b.widthCm,
+    lengthCm: b.lengthCm,
+    yarnWeight: b.yarnWeight,
+    fibres: b.fibres,
+    features: b.features,
+    machineWashable: b.machineWashable,
+    dryerSafe: b.dryerSafe,
+    smokeFree: b.smokeFree,
+    petFree: b.petFree,
+    newYarn: b.newYarn,
+  };
+}

@@ -9,7 +9,7 @@ import { Recipient } from '../../db/models/recipient';
 import { Site } from '../../db/models/site';
 import { User } from '../../db/models/user';
 import { HttpError, notFound } from '../../lib/http-error';
-import type { BlanketFields, BlanketStatus } from '../../../shared/schemas/blanket';
+import { pickBlanketFields, type BlanketFields, type BlanketStatus } from '../../../shared/schemas/blanket';
 import {
   LOG_FIELDS,
   type BlanketCreate,
@@ -38,21 +38,6 @@ type Loaded = Blanket & {
   photos?: Photo[];
   events?: Array<BlanketEvent & { actor?: User | null }>;
 };
-
-export function blanketFields(b: Blanket): BlanketFields {
-  return {
-    widthCm: b.widthCm,
-    lengthCm: b.lengthCm,
-    yarnWeight: b.yarnWeight,
-    fibres: b.fibres,
-    features: b.features,
-    machineWashable: b.machineWashable,
-    dryerSafe: b.dryerSafe,
-    smokeFree: b.smokeFree,
-    petFree: b.petFree,
-    newYarn: b.newYarn,
-  };
-}
 
 export function photoView(p: Photo): PhotoView {
   const url = `/api/blankets/${p.blanketId}/photos/${p.id}`;
@@ -137,7 +122,7 @@ export async function blanketDetail(actor: Actor, id: number, transaction?: Tran
     transaction,
   })) as Loaded;
   const isMaker = b.userId === actor.id;
-  const { selfCheck, fitsRecipients } = selfCheckOf(blanketFields(b), b.recipient, await activeRecipients(transaction));
+  const { selfCheck, fitsRecipients } = selfCheckOf(pickBlanketFields(b), b.recipient, await activeRecipients(transaction));
   const brief = b.recipient ? recipientBrief(b.recipient) : null;
   const events: BlanketEventView[] = [...(b.events ?? [])]
     .sort((x, y) => new Date(x.createdAt).getTime() - new Date(y.createdAt).getTime() || x.id - y.id)

@@ -10,7 +10,7 @@ import { enqueueMail } from '../../mail/outbox';
 import { blanketNeedsFixMail } from '../../mail/templates';
 import { checkTransition } from '../../../shared/blankets/status';
 import { sizeCategoryFor } from '../../../shared/guidelines/size-categories';
-import type { BlanketFields, BlanketStatus } from '../../../shared/schemas/blanket';
+import { pickBlanketFields, type BlanketFields, type BlanketStatus } from '../../../shared/schemas/blanket';
 import {
   CHECKLIST_ITEMS,
   RECEIVABLE_STATUSES,
@@ -43,21 +43,6 @@ type LoadedBlanket = Blanket & { maker?: User; recipient?: Recipient | null; sit
 export function makerLabel(b: Pick<Blanket, 'labelName'>, maker: Pick<User, 'name'> | undefined): string {
   if (b.labelName === 'anonymous' || !maker) return 'Anonymous';
   return maker.name.trim().split(/\s+/)[0] ?? 'Anonymous';
-}
-
-export function blanketFields(b: Blanket): BlanketFields {
-  return {
-    widthCm: b.widthCm,
-    lengthCm: b.lengthCm,
-    yarnWeight: b.yarnWeight,
-    fibres: b.fibres,
-    features: b.features ?? [],
-    machineWashable: b.machineWashable,
-    dryerSafe: b.dryerSafe,
-    smokeFree: b.smokeFree,
-    petFree: b.petFree,
-    newYarn: b.newYarn,
-  };
 }
 
 async function historyOf(blanketId: number, transaction?: Transaction) {
@@ -141,7 +126,7 @@ export interface BlanketWithCheck {
 }
 
 async function withCheck(b: LoadedBlanket): Promise<BlanketWithCheck> {
-  const check = b.recipientId ? await checkAgainst(b.recipientId, blanketFields(b)) : null;
+  const check = b.recipientId ? await checkAgainst(b.recipientId, pickBlanketFields(b)) : null;
   return { blanket: await view(b), check };
 }
 
@@ -230,7 +215,7 @@ export async function inspect(
       ]);
     }
 
-    const before = blanketFields(b);
+    const before = pickBlanketFields(b);
     const corrected: BlanketFields = { ...before, ...(input.corrections ?? {}) };
     const check = await checkAgainst(targetId, corrected, transaction).catch((e: unknown) => {
       if (e instanceof HttpError && e.status === 404) {

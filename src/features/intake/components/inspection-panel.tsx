@@ -9,7 +9,7 @@ import { cn } from '@/components/ui/cn';
 import { ApiError } from '@/lib/api-client';
 import { cautionsFor } from '../../../../shared/guidelines/cautions';
 import { featureLabel, fibreLabel, isInfantPopulation, yarnWeightName } from '../../../../shared/guidelines/wording';
-import { FEATURES, FIBRES, YARN_WEIGHTS, type BlanketFields, type Feature, type Fibre } from '../../../../shared/schemas/blanket';
+import { FEATURES, FIBRES, YARN_WEIGHTS, pickBlanketFields, type BlanketFields, type Feature, type Fibre } from '../../../../shared/schemas/blanket';
 import {
   CHECKLIST_ITEMS,
   OUTCOME_LABELS,
@@ -33,20 +33,8 @@ interface Choice {
 }
 const sameChoice = (a: Choice | null, b: Choice | null) => !!a && !!b && a.outcome === b.outcome && a.redirectRecipientId === b.redirectRecipientId;
 
-function fieldsOf(b: IntakeBlanketView): BlanketFields {
-  return {
-    widthCm: b.widthCm,
-    lengthCm: b.lengthCm,
-    yarnWeight: b.yarnWeight,
-    fibres: b.fibres as Fibre[],
-    features: b.features as Feature[],
-    machineWashable: b.machineWashable,
-    dryerSafe: b.dryerSafe,
-    smokeFree: b.smokeFree,
-    petFree: b.petFree,
-    newYarn: b.newYarn,
-  };
-}
+// The view carries fibres and features as plain strings; they came from a validated log.
+const fieldsOf = (b: IntakeBlanketView): BlanketFields => ({ ...pickBlanketFields(b), fibres: b.fibres as Fibre[], features: b.features as Feature[] });
 
 const toggle = <T,>(list: readonly T[], item: T, on: boolean): T[] => (on ? [...list.filter((x) => x !== item), item] : list.filter((x) => x !== item));
 
