@@ -48,6 +48,15 @@ export type SizeCategory = z.infer<typeof SizeCategorySchema>;
 export const POPULATIONS = ['preemie', 'infant', 'child', 'teen', 'adult', 'elder'] as const;
 export const PopulationSchema = z.enum(POPULATIONS);
 export type Population = z.infer<typeof PopulationSchema>;
+/** Who a recipient serves, as a badge or a form option says it. */
+export const POPULATION_LABELS: Record<Population, string> = {
+  preemie: 'Premature and newborn babies',
+  infant: 'Babies and toddlers',
+  child: 'Children',
+  teen: 'Teenagers',
+  adult: 'Adults',
+  elder: 'Older people in care',
+};
 
 export const BODY_STITCHES = [
   'sc',

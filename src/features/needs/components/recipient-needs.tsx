@@ -5,18 +5,10 @@ import { Badge } from '@/components/ui/badge';
 import { ProgressBar } from '@/components/ui/progress-bar';
 import { Cautions } from '@/components/ui/cautions';
 import { daysUntil, formatDay } from '@/components/ui/format-day';
+import { POPULATION_LABELS } from '../../../../shared/schemas/blanket';
 import type { OpenNeed, RecipientBrief } from '../../../../shared/schemas/pledge';
 import { sizeCategoryRow } from '../../../../shared/guidelines/size-categories';
 import { capitalise } from '../../../../shared/guidelines/wording';
-
-const POPULATION_WORDS: Record<string, string> = {
-  preemie: 'Premature and newborn babies',
-  infant: 'Babies and toddlers',
-  child: 'Children',
-  teen: 'Teenagers',
-  adult: 'Adults',
-  elder: 'Older people in care',
-};
 
 function NeedRow({ need, action }: { need: OpenNeed; action?: ReactNode }) {
   const days = daysUntil(need.deadline);
@@ -58,7 +50,7 @@ export function RecipientNeeds({ recipient, needs, action }: { recipient: Recipi
         <h3 id={headingId} className="text-2xl font-bold">
           {recipient.name}
         </h3>
-        <Badge tone="sky">{POPULATION_WORDS[recipient.population] ?? capitalise(recipient.population)}</Badge>
+        <Badge tone="sky">{POPULATION_LABELS[recipient.population] ?? capitalise(recipient.population)}</Badge>
       </div>
       <div className="grid gap-4 lg:grid-cols-2">
         <div className="space-y-4">

@@ -4,10 +4,9 @@ import { Button } from '@/components/ui/button';
 import { Checkbox, Field, Input, Select, Textarea } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { PinMap } from '@/components/ui/pin-map';
-import { POPULATIONS, type Population } from '../../../../shared/schemas/blanket';
+import { POPULATION_LABELS, POPULATIONS, type Population } from '../../../../shared/schemas/blanket';
 import { RECIPIENT_KINDS, RECIPIENT_KIND_LABELS, RecipientCreateSchema, type RecipientKind } from '../../../../shared/schemas/recipient';
 import type { RecipientInput } from '../api/create-recipient';
-import { POPULATION_LABELS } from './population-labels';
 import { fieldErrors, zodErrors } from './field-errors';
 
 export const DEMO_TOWN_CENTRE = { lat: 46.2, lng: -27.4 };
