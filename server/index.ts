@@ -48,7 +48,12 @@ async function main() {
     sessionSecret: sessionSecret(config.sessionSecret, config.databasePath),
     clientDir: config.serveClient ? path.join(root, 'dist') : undefined,
   });
-  app.listen(config.port, config.host, () => {
+  // Express 5 hands a listen failure (a port in use, say) to this callback.
+  app.listen(config.port, config.host, (err?: Error) => {
+    if (err) {
+      console.error(`Kindloop could not listen on ${config.host}:${config.port}: ${err.message}`);
+      process.exit(1);
+    }
     console.log(`Kindloop is ready on http://${config.host}:${config.port}`);
   });
 }

@@ -188,3 +188,20 @@ describe('idle sessions', () => {
     expect((await c.get('/api/auth/me')).status).toBe(401);
   });
 });
+
+describe('cookies in production', () => {
+  it('marks the session cookie Secure when NODE_ENV=production, behind a TLS proxy on loopback', async () => {
+    const prod = await makeTestApp({ seed: false, env: { NODE_ENV: 'production' } });
+    try {
+      const res = await request(prod.app).get('/api/auth/csrf').set('X-Forwarded-Proto', 'https');
+      expect(String(res.headers['set-cookie'])).toMatch(/kindloop\.sid=.*;.*Secure/i);
+    } finally {
+      await prod.close();
+    }
+  });
+  it('sets a plain cookie by default, so `npm start` on http://127.0.0.1 can sign people in', async () => {
+    const res = await request(t.app).get('/api/auth/csrf');
+    expect(String(res.headers['set-cookie'])).toMatch(/kindloop\.sid=/);
+    expect(String(res.headers['set-cookie'])).not.toMatch(/Secure/i);
+  });
+});

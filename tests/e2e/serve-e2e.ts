@@ -11,8 +11,8 @@ import { E2E_PASSWORD } from './password';
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'kindloop-e2e-'));
 if (!process.env.E2E_SKIP_BUILD) execSync('npx vite build --logLevel warn', { stdio: 'inherit' });
 
+// NODE_ENV is left as `npm start` leaves it, so the browser tests run the configuration people get.
 Object.assign(process.env, {
-  NODE_ENV: 'test',
   PORT: process.env.E2E_PORT ?? '3310',
   HOST: '127.0.0.1',
   DATABASE_PATH: path.join(dir, 'e2e.sqlite'),
