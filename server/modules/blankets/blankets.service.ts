@@ -39,6 +39,20 @@ type Loaded = Blanket & {
   events?: Array<BlanketEvent & { actor?: User | null }>;
 };
 
+/** One step of a blanket's history as the blanket page and the intake table show it. */
+export function eventView(e: BlanketEvent & { actor?: User | null }): BlanketEventView {
+  return {
+    id: e.id,
+    kind: e.kind,
+    fromStatus: (e.fromStatus as BlanketStatus | null) ?? null,
+    toStatus: (e.toStatus as BlanketStatus | null) ?? null,
+    reason: e.reason ?? null,
+    data: e.data ?? null,
+    createdAt: new Date(e.createdAt).toISOString(),
+    actor: e.actor ? { id: e.actor.id, name: e.actor.name } : null,
+  };
+}
+
 export function photoView(p: Photo): PhotoView {
   const url = `/api/blankets/${p.blanketId}/photos/${p.id}`;
   return {
@@ -126,16 +140,7 @@ export async function blanketDetail(actor: Actor, id: number, transaction?: Tran
   const brief = b.recipient ? recipientBrief(b.recipient) : null;
   const events: BlanketEventView[] = [...(b.events ?? [])]
     .sort((x, y) => new Date(x.createdAt).getTime() - new Date(y.createdAt).getTime() || x.id - y.id)
-    .map((e) => ({
-      id: e.id,
-      kind: e.kind,
-      fromStatus: (e.fromStatus as BlanketStatus | null) ?? null,
-      toStatus: (e.toStatus as BlanketStatus | null) ?? null,
-      reason: e.reason ?? null,
-      data: e.data ?? null,
-      createdAt: new Date(e.createdAt).toISOString(),
-      actor: e.actor ? { id: e.actor.id, name: e.actor.name } : null,
-    }));
+    .map(eventView);
   return {
     ...summaryOf(b),
     fibres: b.fibres,

@@ -25,6 +25,7 @@ import {
 } from '../../../shared/schemas/intake';
 import type { Role } from '../../../shared/schemas/user';
 import { checkAgainst, type CheckAnswer } from '../guidelines/guidelines.service';
+import { eventView } from '../blankets/blankets.service';
 
 export interface Actor {
   id: number;
@@ -52,19 +53,7 @@ async function historyOf(blanketId: number, transaction?: Transaction) {
     order: [['createdAt', 'ASC'], ['id', 'ASC']],
     transaction,
   });
-  return events.map((e) => {
-    const actor = (e as BlanketEvent & { actor?: User | null }).actor;
-    return {
-      id: e.id,
-      kind: e.kind,
-      fromStatus: e.fromStatus,
-      toStatus: e.toStatus,
-      reason: e.reason ?? null,
-      data: e.data ?? null,
-      createdAt: e.createdAt.toISOString(),
-      actor: actor ? { id: actor.id, name: actor.name } : null,
-    };
-  });
+  return events.map((e) => eventView(e as BlanketEvent & { actor?: User | null }));
 }
 
 async function view(b: LoadedBlanket, transaction?: Transaction): Promise<IntakeBlanketView> {
