@@ -20,7 +20,7 @@ async function expectAccessible(page: Page, path: string) {
 const publicPages = ['/', '/sign-in', '/register', '/forgot-password', '/planner', '/no-such-page'];
 const signedInPages: Record<Who, string[]> = {
   volunteer: ['/home', '/needs', '/pledges', '/blankets', '/blankets/new'],
-  organiser: ['/organiser/intake', '/organiser/queue', '/all-blankets', '/recipients'],
+  organiser: ['/home', '/organiser/intake', '/organiser/queue', '/all-blankets', '/recipients'],
   coordinator: ['/sites', '/people', '/mail'],
 };
 

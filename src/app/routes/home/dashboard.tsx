@@ -1,3 +1,4 @@
+import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { ArrowRight } from 'lucide-react';
 import { Card } from '@/components/ui/card';
@@ -6,6 +7,29 @@ import { ProgressBar } from '@/components/ui/progress-bar';
 import { navItems } from '@/components/layout/nav-items';
 import { useMe } from '@/features/auth/api/get-me';
 import { useDrive } from '@/features/drive/api/get-drive';
+import { useNeeds } from '@/features/needs/api/get-needs';
+import { useAllBlankets } from '@/features/blankets/api/get-all-blankets';
+import { Loading } from '@/components/ui/spinner';
+
+// The charting library is large; only staff see the charts, so only they load it.
+// The charts are pictures of the tables beside them, so they stay out of the tab order and the accessibility tree.
+const ProgressCharts = lazy(() => import('@/features/progress/components/progress-charts').then((m) => ({ default: m.ProgressCharts })));
+
+function DriveProgress() {
+  const needs = useNeeds();
+  const blankets = useAllBlankets();
+  if (!needs.data || !blankets.data) return <Loading label="Gathering the drive’s figures…" />;
+  return (
+    <section aria-labelledby="progress">
+      <h2 id="progress" className="mb-3 text-2xl font-bold">
+        How the drive is going
+      </h2>
+      <Suspense fallback={<Loading label="Drawing the charts…" />}>
+        <ProgressCharts needs={needs.data} blankets={blankets.data} />
+      </Suspense>
+    </section>
+  );
+}
 
 const leads = {
   volunteer: 'See what the recipients still need, plan your next blanket and keep track of the ones you have made.',
@@ -37,6 +61,7 @@ export default function DashboardPage() {
           <ProgressBar value={elapsed} label="How far through the drive we are" tone="marigold" />
         </Card>
       )}
+      {user.role !== 'volunteer' && <DriveProgress />}
       <section aria-labelledby="go">
         <h2 id="go" className="mb-3 text-2xl font-bold">
           Where to go

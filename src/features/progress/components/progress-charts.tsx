@@ -1,0 +1,109 @@
+import { Bar, BarChart, CartesianGrid, Cell, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { BarChart3 } from 'lucide-react';
+import { Card, CardTitle } from '@/components/ui/card';
+import { EmptyState } from '@/components/ui/empty-state';
+import { recipientProgress, statusCounts, type BlanketLike, type NeedLike } from './progress-data';
+
+const COLOURS = {
+  wanted: 'var(--color-sky-700)',
+  pledged: 'var(--color-heather-500)',
+  inHand: 'var(--color-moss-500)',
+  status: 'var(--color-heather-700)',
+  attention: 'var(--color-marigold-400)',
+  declined: 'var(--color-brick-500)',
+};
+
+const axis = { fontSize: 14, fill: 'var(--color-ink)' };
+
+/** Charts of the drive for organisers and the coordinator, each with the same figures as a table for screen readers. */
+export function ProgressCharts({ needs, blankets }: { needs: NeedLike[]; blankets: BlanketLike[] }) {
+  const perRecipient = recipientProgress(needs, blankets);
+  const perStatus = statusCounts(blankets);
+  if (perRecipient.length === 0 && blankets.length === 0) {
+    return (
+      <EmptyState icon={BarChart3} title="Nothing to chart yet">
+        Once recipients have needs and makers start pledging, the drive's progress shows here.
+      </EmptyState>
+    );
+  }
+  return (
+    <div className="grid gap-6 lg:grid-cols-2">
+      {/* min-w-0: a grid item would otherwise grow to the chart's width and push the page sideways on a phone. */}
+      <Card className="min-w-0">
+        <CardTitle>Wanted, pledged and in hand</CardTitle>
+        <p className="mb-3 text-ink-soft">Per recipient: blankets asked for, promised by makers, and already with the organisers.</p>
+        <div aria-hidden className="h-80" data-testid="chart-recipients">
+          <ResponsiveContainer width="100%" height="100%">
+            <BarChart accessibilityLayer={false} data={perRecipient} layout="vertical" margin={{ left: 8, right: 16 }}>
+              <CartesianGrid strokeDasharray="3 3" horizontal={false} />
+              <XAxis type="number" allowDecimals={false} tick={axis} />
+              <YAxis type="category" dataKey="name" width={110} tick={{ ...axis, fontSize: 12 }} tickFormatter={(n: string) => (n.length > 22 ? `${n.slice(0, 21)}…` : n)} />
+              <Tooltip />
+              <Legend wrapperStyle={{ fontSize: 14 }} formatter={(value: string) => <span style={{ color: 'var(--color-ink)' }}>{value}</span>} />
+              <Bar dataKey="wanted" name="Wanted" fill={COLOURS.wanted} isAnimationActive={false} />
+              <Bar dataKey="pledged" name="Pledged" fill={COLOURS.pledged} isAnimationActive={false} />
+              <Bar dataKey="inHand" name="In hand" fill={COLOURS.inHand} isAnimationActive={false} />
+            </BarChart>
+          </ResponsiveContainer>
+        </div>
+        {/* The wrapper hides it: a table ignores the 1px width sr-only gives it and would widen the page. */}
+        <div className="sr-only">
+        <table>
+          <caption>Wanted, pledged and in hand per recipient</caption>
+          <thead>
+            <tr>
+              <th>Recipient</th>
+              <th>Wanted</th>
+              <th>Pledged</th>
+              <th>In hand</th>
+            </tr>
+          </thead>
+          <tbody>
+            {perRecipient.map((r) => (
+              <tr key={r.name}>
+                <td>{r.name}</td>
+                <td>{r.wanted}</td>
+                <td>{r.pledged}</td>
+                <td>{r.inHand}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        </div>
+      </Card>
+      <Card className="min-w-0">
+        <CardTitle>Where the blankets are</CardTitle>
+        <p className="mb-3 text-ink-soft">Every logged blanket by the step it has reached; yellow needs a fix, red was declined.</p>
+        <div aria-hidden className="h-80" data-testid="chart-statuses">
+          <ResponsiveContainer width="100%" height="100%">
+            <BarChart accessibilityLayer={false} data={perStatus} margin={{ bottom: 40, right: 8 }}>
+              <CartesianGrid strokeDasharray="3 3" vertical={false} />
+              <XAxis dataKey="label" interval={0} angle={-35} textAnchor="end" tick={{ ...axis, fontSize: 12 }} />
+              <YAxis allowDecimals={false} tick={axis} />
+              <Tooltip />
+              <Bar dataKey="count" name="Blankets" isAnimationActive={false}>
+                {perStatus.map((s) => (
+                  <Cell key={s.status} fill={s.status === 'needs_fix' ? COLOURS.attention : s.status === 'declined' ? COLOURS.declined : COLOURS.status} />
+                ))}
+              </Bar>
+            </BarChart>
+          </ResponsiveContainer>
+        </div>
+        {/* The wrapper hides it: a table ignores the 1px width sr-only gives it and would widen the page. */}
+        <div className="sr-only">
+        <table>
+          <caption>Blankets by status</caption>
+          <tbody>
+            {perStatus.map((s) => (
+              <tr key={s.status}>
+                <th scope="row">{s.label}</th>
+                <td>{s.count}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        </div>
+      </Card>
+    </div>
+  );
+}
