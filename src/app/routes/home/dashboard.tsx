@@ -10,6 +10,46 @@ import { useDrive } from '@/features/drive/api/get-drive';
 import { useNeeds } from '@/features/needs/api/get-needs';
 import { useAllBlankets } from '@/features/blankets/api/get-all-blankets';
 import { Loading } from '@/components/ui/spinner';
+import { Badge } from '@/components/ui/badge';
+import { useMyPledges } from '@/features/pledges/api/get-pledges';
+import { useMyBlankets } from '@/features/blankets/api/get-blankets';
+import { formatDay } from '@/components/ui/format-day';
+
+/** A maker's own part of the drive at a glance: what they promised, made and handed in. */
+function MyPart() {
+  const pledges = useMyPledges();
+  const blankets = useMyBlankets();
+  if (!pledges.data || !blankets.data) return <Loading label="Gathering your pledges…" />;
+  const active = pledges.data.filter((p) => p.status !== 'cancelled');
+  const promised = active.reduce((n, p) => n + p.quantity, 0);
+  const finished = active.reduce((n, p) => n + p.blanketsFinished, 0);
+  const handedIn = blankets.data.filter((b) => ['received', 'checked', 'assigned', 'packed', 'delivered'].includes(b.status)).length;
+  const late = active.filter((p) => p.late).length;
+  const next = active
+    .filter((p) => p.status === 'active' && p.blanketsFinished < p.quantity)
+    .sort((a, b) => a.dueDate.localeCompare(b.dueDate))[0];
+  return (
+    <Card>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h2 className="text-xl font-bold">Your part</h2>
+        {late > 0 && <Badge tone="brick">{late === 1 ? 'One pledge is late' : `${late} pledges are late`}</Badge>}
+      </div>
+      {promised === 0 ? (
+        <p className="mt-2 text-ink-soft">
+          You haven't pledged yet. <Link to="/needs">See what's needed</Link> and promise what you can make.
+        </p>
+      ) : (
+        <>
+          <p className="mb-4 mt-1 text-ink-soft">
+            {promised} promised · {finished} finished · {handedIn} handed in
+            {next ? (next.late ? ` · one was due ${formatDay(next.dueDate)}` : ` · next due ${formatDay(next.dueDate)}`) : ''}
+          </p>
+          <ProgressBar value={promised ? finished / promised : 0} label="Blankets finished of those you promised" tone="moss" />
+        </>
+      )}
+    </Card>
+  );
+}
 
 // The charting library is large; only staff see the charts, so only they load it.
 // The charts are pictures of the tables beside them, so they stay out of the tab order and the accessibility tree.
@@ -61,7 +101,7 @@ export default function DashboardPage() {
           <ProgressBar value={elapsed} label="How far through the drive we are" tone="marigold" />
         </Card>
       )}
-      {user.role !== 'volunteer' && <DriveProgress />}
+      {user.role === 'volunteer' ? <MyPart /> : <DriveProgress />}
       <section aria-labelledby="go">
         <h2 id="go" className="mb-3 text-2xl font-bold">
           Where to go
