@@ -29,6 +29,12 @@ export interface PlanBorderInput {
   mode?: RoundMode;
   /** Stitches before the first repeat on an edge; default ⌈offset / 2⌉ (the shell's "sc in first st"). */
   lead?: number;
+  /**
+   * In a continuous round the maker may begin the first repeat anywhere, so `lead` is only where
+   * they would usually begin: the plan moves it when another start centres a repeat on more
+   * corners. Set keepLead to begin exactly at `lead`.
+   */
+  keepLead?: boolean;
   /** 0-based centre stitch of the repeat; default ⌊(multiple − 1) / 2⌋ (the shell's 5-dc stitch). */
   centre?: number;
   /** The foundation round's stitch, for the wording only. */
@@ -215,7 +221,21 @@ export function planBorder(input: PlanBorderInput): BorderPlan {
   }
 
   const fitted = { top: edges.top.fitted, right: edges.right.fitted, bottom: edges.bottom.fitted, left: edges.left.fitted };
-  const sim = simulateRound(fitted, { multiple, mode, lead, centre });
+  // In one continuous round the maker may begin the first repeat wherever they like: begin it where
+  // the most corners get a centred repeat (the usual start wins a tie), unless told to keep it.
+  let leadUsed = lead;
+  if (mode === 'continuous' && !input.keepLead) {
+    const centred = (l: number) => simulateRound(fitted, { multiple, mode, lead: l, centre }).corners.filter((c) => c.centred).length;
+    let best = centred(lead);
+    for (let l = 0; l < multiple; l++) {
+      const k = centred(l);
+      if (k > best) {
+        best = k;
+        leadUsed = l;
+      }
+    }
+  }
+  const sim = simulateRound(fitted, { multiple, mode, lead: leadUsed, centre });
   if (mode === 'continuous') {
     for (const edge of EDGE_ORDER) edges[edge].repeats = sim.repeats.filter((r) => r.on === edge).length;
   }
@@ -237,6 +257,11 @@ export function planBorder(input: PlanBorderInput): BorderPlan {
       : `The whole round holds a multiple of ${multiple} (${sim.total} stitches, ${sim.repeats.length} repeats), so the last repeat closes onto the first.`,
     cornerSummary(sim.corners),
   ];
+  if (leadUsed !== lead) {
+    notes.push(
+      `Begin the first repeat after ${leadUsed} ${leadUsed === 1 ? 'stitch' : 'stitches'} of the top edge rather than ${lead}: that centres a repeat on more corners.`,
+    );
+  }
   if (mode === 'continuous' && (!edges.bottom.sameAs || !edges.left.sameAs)) {
     notes.push("The change does not split evenly, so opposite edges end with different counts: follow each edge's own line.");
   }
@@ -246,7 +271,7 @@ export function planBorder(input: PlanBorderInput): BorderPlan {
     strategy,
     multiple,
     offset,
-    lead,
+    lead: leadUsed,
     centre,
     edges,
     corners: { perCorner: CORNER_STITCHES, total: CORNER_COUNT * CORNER_STITCHES },

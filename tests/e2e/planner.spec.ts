@@ -104,3 +104,16 @@ test('a signed-in volunteer saves a plan, sees it listed and loads it back', asy
   await page.setViewportSize({ width: 1280, height: 900 });
   await shot(page, 'planner-saved-1280');
 });
+
+test('one continuous round moves the first repeat so more corners get a centred repeat, and says where to begin', async ({ page }) => {
+  await page.goto('/planner');
+  await page.getByLabel('Stitches across').fill('20');
+  await page.getByLabel('Rows', { exact: true }).fill('20');
+  await page.getByLabel('Just a count').check();
+  await page.getByLabel('Border pattern').selectOption('wide-scallop');
+  await page.getByLabel('One continuous round').check();
+  // Begun where the pattern usually begins, no corner would get a centred scallop; two stitches on, all four do.
+  await expect(page.getByText(/Begin the first repeat after 2 stitches of the top edge rather than 1/)).toBeVisible();
+  await expect(page.getByTestId('blanket-drawing').locator('[data-testid="corner-mark"][data-centred="true"]')).toHaveCount(4);
+  await shot(page, 'planner-continuous');
+});
