@@ -99,11 +99,10 @@ function checkVersion(b: Blanket, sent: number | undefined) {
 }
 
 /**
- * The one gate for the status moves intake makes. A walk-in drop-off (finished → received, no
- * booking) is normal at the table, so intake allows it beside the moves of the status machine.
+ * The one gate for the status moves intake makes: the status machine's own rules (a walk-in
+ * drop-off, finished → received, is one of its moves).
  */
 function assertMove(from: BlanketStatus, to: BlanketStatus, actor: Actor, isMaker: boolean, reason?: string | null) {
-  if (from === 'finished' && to === 'received' && (actor.role === 'organiser' || actor.role === 'coordinator')) return;
   const verdict = checkTransition(from, to, { role: actor.role, isMaker }, reason);
   if (!verdict.ok) throw new HttpError(verdict.refusal === 'role' ? 403 : 409, verdict.message);
 }
