@@ -2,6 +2,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import { Op, type Sequelize } from 'sequelize';
 import { User } from '../../db/models/user';
 import { PasswordReset } from '../../db/models/password-reset';
+import { Session } from '../../db/models/session';
 import { enqueueMail } from '../../mail/outbox';
 import { passwordResetMail, welcomeMail } from '../../mail/templates';
 import { hashPassword } from '../../auth/password';
@@ -58,7 +59,7 @@ export async function confirmPasswordReset(ctx: AuthContext, token: string, pass
     user.passwordHash = passwordHash;
     await user.save({ transaction });
     // Sign the account out everywhere: whoever knew the old password loses their session too.
-    await ctx.sequelize.models.Session.destroy({ where: { userId: user.id }, transaction });
+    await Session.destroy({ where: { userId: user.id }, transaction });
     return user.toPublic();
   });
 }

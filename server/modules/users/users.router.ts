@@ -1,4 +1,5 @@
 import { User } from '../../db/models/user';
+import { Session } from '../../db/models/session';
 import { IdParamSchema, UserUpdateSchema } from '../../../shared/schemas/user';
 import { validate } from '../../middleware/validate';
 import { HttpError, notFound } from '../../lib/http-error';
@@ -27,7 +28,7 @@ export function userRoutes(): RouteDef[] {
           if (req.body.role !== undefined) user.role = req.body.role;
           if (req.body.active !== undefined) user.active = req.body.active;
           await user.save();
-          if (user.active === false) await User.sequelize!.models.Session.destroy({ where: { userId: user.id } });
+          if (user.active === false) await Session.destroy({ where: { userId: user.id } });
           res.json({ user: user.toPublic() });
         },
       ],
