@@ -10,6 +10,7 @@ import { useDrive } from '@/features/drive/api/get-drive';
 import { useNeeds } from '@/features/needs/api/get-needs';
 import { useAllBlankets } from '@/features/blankets/api/get-all-blankets';
 import { Loading } from '@/components/ui/spinner';
+import { IN_HAND } from '@/features/progress/components/progress-data';
 import { Badge } from '@/components/ui/badge';
 import { useMyPledges } from '@/features/pledges/api/get-pledges';
 import { useMyBlankets } from '@/features/blankets/api/get-blankets';
@@ -23,7 +24,7 @@ function MyPart() {
   const active = pledges.data.filter((p) => p.status !== 'cancelled');
   const promised = active.reduce((n, p) => n + p.quantity, 0);
   const finished = active.reduce((n, p) => n + p.blanketsFinished, 0);
-  const handedIn = blankets.data.filter((b) => ['received', 'checked', 'assigned', 'packed', 'delivered'].includes(b.status)).length;
+  const handedIn = blankets.data.filter((b) => IN_HAND.includes(b.status)).length;
   const late = active.filter((p) => p.late).length;
   const next = active
     .filter((p) => p.status === 'active' && p.blanketsFinished < p.quantity)

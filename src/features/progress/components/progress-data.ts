@@ -12,7 +12,7 @@ export interface BlanketLike {
 }
 
 /** Statuses from which a blanket is in the organisers' hands or beyond. */
-const IN_HAND: readonly BlanketStatus[] = ['received', 'checked', 'assigned', 'packed', 'delivered'];
+export const IN_HAND: readonly BlanketStatus[] = ['received', 'checked', 'assigned', 'packed', 'delivered'];
 
 export interface RecipientProgress {
   name: string;
