@@ -223,19 +223,20 @@ export function planBorder(input: PlanBorderInput): BorderPlan {
   const fitted = { top: edges.top.fitted, right: edges.right.fitted, bottom: edges.bottom.fitted, left: edges.left.fitted };
   // In one continuous round the maker may begin the first repeat wherever they like: begin it where
   // the most corners get a centred repeat (the usual start wins a tie), unless told to keep it.
+  const simulate = (l: number) => simulateRound(fitted, { multiple, mode, lead: l, centre });
+  const centredCorners = (r: ReturnType<typeof simulate>) => r.corners.filter((c) => c.centred).length;
   let leadUsed = lead;
+  let sim = simulate(lead);
   if (mode === 'continuous' && !input.keepLead) {
-    const centred = (l: number) => simulateRound(fitted, { multiple, mode, lead: l, centre }).corners.filter((c) => c.centred).length;
-    let best = centred(lead);
     for (let l = 0; l < multiple; l++) {
-      const k = centred(l);
-      if (k > best) {
-        best = k;
+      if (l === lead) continue;
+      const candidate = simulate(l);
+      if (centredCorners(candidate) > centredCorners(sim)) {
+        sim = candidate;
         leadUsed = l;
       }
     }
   }
-  const sim = simulateRound(fitted, { multiple, mode, lead: leadUsed, centre });
   if (mode === 'continuous') {
     for (const edge of EDGE_ORDER) edges[edge].repeats = sim.repeats.filter((r) => r.on === edge).length;
   }
