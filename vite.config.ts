@@ -8,7 +8,10 @@ const apiPort = Number(process.env.API_PORT ?? 3001);
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   resolve: {
-    alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) },
+    alias: {
+      '@': fileURLToPath(new URL('./src', import.meta.url)),
+      '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
+    },
   },
   server: {
     host: '127.0.0.1',

@@ -4,11 +4,11 @@
  *
  *   npm run bench
  */
-import { planBorder } from '../shared/border/plan';
-import { check } from '../shared/guidelines/check';
-import { defaultGuidelines } from '../shared/guidelines/defaults';
-import { POPULATIONS } from '../shared/schemas/blanket';
-import type { BlanketFields } from '../shared/schemas/blanket';
+import { planBorder } from '@shared/border/plan';
+import { check } from '@shared/guidelines/check';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
+import { POPULATIONS } from '@shared/schemas/blanket';
+import type { BlanketFields } from '@shared/schemas/blanket';
 
 function time(fn: () => unknown, iterations: number): number {
   const start = process.hrtime.bigint();

@@ -1,5 +1,5 @@
 import type { RequestHandler } from 'express';
-import type { Role } from '../../shared/schemas/user';
+import type { Role } from '@shared/schemas/user';
 import { HttpError } from '../lib/http-error';
 
 export type Access = 'public' | 'signed-in' | Role[];

@@ -1,4 +1,4 @@
-import type { Role } from '../../shared/schemas/user';
+import type { Role } from '@shared/schemas/user';
 
 declare global {
   namespace Express {

@@ -2,7 +2,7 @@ import type { ComponentType } from 'react';
 import { createBrowserRouter } from 'react-router-dom';
 import { AppShell } from '@/components/layout/app-shell';
 import { RequireRole } from '@/components/layout/require-role';
-import type { Role } from '../../shared/schemas/user';
+import type { Role } from '@shared/schemas/user';
 import { ErrorPage } from './routes/error-page';
 
 type Loader = () => Promise<{ default: ComponentType }>;

@@ -10,10 +10,10 @@ import { Recipient } from '../../server/db/models/recipient';
 import { User } from '../../server/db/models/user';
 import { uniqueBlanketCode } from '../../server/modules/blankets/blanket-code';
 import { guidelinesOf } from '../../server/modules/pledges/recipient-brief';
-import { check } from '../../shared/guidelines/check';
-import { CODE_ALPHABET, CODE_PREFIX, isBlanketCode } from '../../shared/blankets/code';
-import type { BlanketDetail, BlanketSummary } from '../../shared/schemas/blanket-log';
-import type { PledgeView } from '../../shared/schemas/pledge';
+import { check } from '@shared/guidelines/check';
+import { CODE_ALPHABET, CODE_PREFIX, isBlanketCode } from '@shared/blankets/code';
+import type { BlanketDetail, BlanketSummary } from '@shared/schemas/blanket-log';
+import type { PledgeView } from '@shared/schemas/pledge';
 import { allGoodChecklist as ALL_GOOD } from '../fixtures/blankets';
 
 let t: TestApp;

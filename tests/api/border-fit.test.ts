@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { Client, makeTestApp, type TestApp } from './test-app';
-import { planBorder } from '../../shared/border/plan';
+import { planBorder } from '@shared/border/plan';
 
 let t: TestApp;
 let anon: Client;

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { suggestOutcome, CHECKLIST_ITEMS, type Checklist } from '../../shared/schemas/intake';
-import { check } from '../../shared/guidelines/check';
-import { defaultGuidelines } from '../../shared/guidelines/defaults';
+import { suggestOutcome, CHECKLIST_ITEMS, type Checklist } from '@shared/schemas/intake';
+import { check } from '@shared/guidelines/check';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
 import { allGoodChecklist as allGood, plainBlanket } from '../fixtures/blankets';
 
 const infant = defaultGuidelines('infant');

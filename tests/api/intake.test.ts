@@ -7,8 +7,8 @@ import { MailMessage } from '../../server/db/models/mail-message';
 import { Recipient } from '../../server/db/models/recipient';
 import { Site } from '../../server/db/models/site';
 import { User } from '../../server/db/models/user';
-import type { BlanketStatus } from '../../shared/schemas/blanket';
-import { codeFromBytes } from '../../shared/blankets/code';
+import type { BlanketStatus } from '@shared/schemas/blanket';
+import { codeFromBytes } from '@shared/blankets/code';
 import { allGoodChecklist as allGood, plainBlanket } from '../fixtures/blankets';
 
 let t: TestApp;

@@ -8,8 +8,8 @@ import { Photo } from '../../server/db/models/photo';
 import { Need } from '../../server/db/models/need';
 import { Recipient } from '../../server/db/models/recipient';
 import { BlanketEvent } from '../../server/db/models/blanket-event';
-import { MAX_PHOTO_BYTES } from '../../shared/schemas/blanket-log';
-import type { BlanketDetail, PhotoView } from '../../shared/schemas/blanket-log';
+import { MAX_PHOTO_BYTES } from '@shared/schemas/blanket-log';
+import type { BlanketDetail, PhotoView } from '@shared/schemas/blanket-log';
 
 let t: TestApp;
 let vol: Client;

@@ -3,10 +3,10 @@ import request from 'supertest';
 import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
 import { Blanket } from '../../server/db/models/blanket';
 import { User } from '../../server/db/models/user';
-import { borderById } from '../../shared/border/library';
-import { finishedSizeFromCounts } from '../../shared/sizing/gauge';
-import { estimateYarn } from '../../shared/sizing/yarn-estimate';
-import type { PlanDetail, PlanListItem } from '../../shared/schemas/plan';
+import { borderById } from '@shared/border/library';
+import { finishedSizeFromCounts } from '@shared/sizing/gauge';
+import { estimateYarn } from '@shared/sizing/yarn-estimate';
+import type { PlanDetail, PlanListItem } from '@shared/schemas/plan';
 
 let t: TestApp;
 let tobias: Client;
@@ -159,7 +159,7 @@ describe('saved plans', () => {
 describe('the per-maker limit', () => {
   it('refuses a plan past the limit with 409 and keeps the others', async () => {
     const { Plan } = await import('../../server/db/models/plan');
-    const { MAX_PLANS_PER_MAKER } = await import('../../shared/schemas/plan');
+    const { MAX_PLANS_PER_MAKER } = await import('@shared/schemas/plan');
     const c = await signedIn(t.app, 'priya@example.org');
     const user = await User.findOne({ where: { email: 'priya@example.org' } });
     const first = await save(c, 'Kept');

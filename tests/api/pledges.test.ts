@@ -5,7 +5,7 @@ import { Pledge } from '../../server/db/models/pledge';
 import { Need } from '../../server/db/models/need';
 import { Recipient } from '../../server/db/models/recipient';
 import { User } from '../../server/db/models/user';
-import type { OpenNeed, PledgeView } from '../../shared/schemas/pledge';
+import type { OpenNeed, PledgeView } from '@shared/schemas/pledge';
 
 let t: TestApp;
 let vol: Client;

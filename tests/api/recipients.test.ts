@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
-import { defaultGuidelines } from '../../shared/guidelines/defaults';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
 import { Pledge } from '../../server/db/models/pledge';
 import { User } from '../../server/db/models/user';
 import { Need } from '../../server/db/models/need';

@@ -1,14 +1,14 @@
 import { describe, it, expect } from 'vitest';
-import { fitEdge } from '../../shared/border/fit';
+import { fitEdge } from '@shared/border/fit';
 import {
   CORNER_STITCHES,
   ROW_END_ALLOWANCES,
   ROW_END_COMMON_PRACTICE,
   ROW_END_EXTRAPOLATED,
-} from '../../shared/border/row-ends';
-import { planBorder } from '../../shared/border/plan';
-import { BORDER_YARN_ADVICE } from '../../shared/border/library';
-import { usLabelForMm } from '../../shared/sizing/hooks';
+} from '@shared/border/row-ends';
+import { planBorder } from '@shared/border/plan';
+import { BORDER_YARN_ADVICE } from '@shared/border/library';
+import { usLabelForMm } from '@shared/sizing/hooks';
 
 describe('multiple 4 plus 1: common practice (worked by hand)', () => {
   it.each([

@@ -5,9 +5,9 @@ import {
   CPSC_SMALL_PARTS,
   SMALL_PARTS_CYLINDER_IN,
   cautionsFor,
-} from '../../shared/guidelines/cautions';
-import { CM_PER_INCH } from '../../shared/sizing/units';
-import { SIZE_CATEGORY_TABLE, sizeCategoryRow } from '../../shared/guidelines/size-categories';
+} from '@shared/guidelines/cautions';
+import { CM_PER_INCH } from '@shared/sizing/units';
+import { SIZE_CATEGORY_TABLE, sizeCategoryRow } from '@shared/guidelines/size-categories';
 
 const caution = (id: string) => cautionsFor('preemie').find((c) => c.id === id);
 

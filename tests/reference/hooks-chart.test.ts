@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { HOOK_CHART_SOURCE, HOOK_SIZES, mmForUsLabel, usLabelForMm } from '../../shared/sizing/hooks';
+import { HOOK_CHART_SOURCE, HOOK_SIZES, mmForUsLabel, usLabelForMm } from '@shared/sizing/hooks';
 
 // Source: Crochet hook sizes, mm ↔ US — agreeing across several published charts (not confirmed on
 // the council's own page). Brands disagree on two: some give B-1 as 2.0 mm and C-2 as 2.5 mm.

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { hashPassword, verifyPassword } from '../../server/auth/password';
 import { loadConfig } from '../../server/config/env';
-import { PasswordSchema } from '../../shared/schemas/user';
+import { PasswordSchema } from '@shared/schemas/user';
 
 describe('password storage — OWASP Password Storage Cheat Sheet (2026 text): scrypt N=2^17, r=8, p=1', () => {
   it('production default cost is N=2^17 (log2 17), r=8, p=1, recorded in the hash', async () => {

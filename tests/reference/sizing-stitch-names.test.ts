@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { US_TO_UK, US_TO_UK_REFERENCED, US_TO_UK_FROM_MEMORY, usToUkText } from '../../shared/sizing/stitch-names';
+import { US_TO_UK, US_TO_UK_REFERENCED, US_TO_UK_FROM_MEMORY, usToUkText } from '@shared/sizing/stitch-names';
 
 // Source: US ↔ UK stitch names (REFERENCES.md, crochet conventions): US sc = UK dc, hdc = htr, dc = tr, tr = dtr.
 describe('US ↔ UK stitch names', () => {

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { TURNING_CHAINS, TURNING_CHAIN_SOURCE } from '../../shared/sizing/turning-chains';
+import { TURNING_CHAINS, TURNING_CHAIN_SOURCE } from '@shared/sizing/turning-chains';
 
 // Source: Crochet For Dummies; standard US terms — sl st 0, sc 1, hdc 2, dc 3, tr 4, dtr 5;
 // the turning chain counts as a stitch except after sc.

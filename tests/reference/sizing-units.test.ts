@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { CM_PER_INCH, METRES_PER_YARD, UNITS_SOURCE, fromCm, toCm, yardsToMetres, metresToYards } from '../../shared/sizing/units';
+import { CM_PER_INCH, METRES_PER_YARD, UNITS_SOURCE, fromCm, toCm, yardsToMetres, metresToYards } from '@shared/sizing/units';
 
 // Source: international yard and pound agreement, 1959 — 1 in = 2.54 cm and 1 yd = 0.9144 m exactly.
 describe('international yard and pound agreement, 1959', () => {

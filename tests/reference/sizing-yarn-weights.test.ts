@@ -6,7 +6,7 @@ import {
   REGIONAL_NAMES_SOURCE,
   REGIONAL_YARN_NAMES,
   YARN_WEIGHTS,
-} from '../../shared/sizing/yarn-weights';
+} from '@shared/sizing/yarn-weights';
 
 // Source: Craft Yarn Council — Standard Yarn Weight System (crochet columns), as reprinted in craft
 // magazines (e.g. Crochet World, Oct 2018); the council marks all of it "guidelines only".

@@ -4,7 +4,7 @@ import {
   WORSTED_YARDS_PER_SQ_IN_SOURCE,
   YARN_PER_AREA,
   YARN_PER_AREA_SCALING_SOURCE,
-} from '../../shared/sizing/yarn-estimate';
+} from '@shared/sizing/yarn-estimate';
 
 describe('yarn per area', () => {
   // Source: one maker's measurements, published on a blog — about 0.87 yd of worsted per square inch

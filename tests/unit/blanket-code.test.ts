@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { CODE_ALPHABET, CODE_LENGTH, CODE_PREFIX, codeFromBytes, isBlanketCode, normaliseCode } from '../../shared/blankets/code';
+import { CODE_ALPHABET, CODE_LENGTH, CODE_PREFIX, codeFromBytes, isBlanketCode, normaliseCode } from '@shared/blankets/code';
 
 describe('blanket codes', () => {
   it('leaves out the look-alikes 0, O, 1 and I, and has 32 distinct symbols', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { BLANKET_STATUSES, type BlanketStatus } from '../../shared/schemas/blanket';
-import { ROLES } from '../../shared/schemas/user';
+import { BLANKET_STATUSES, type BlanketStatus } from '@shared/schemas/blanket';
+import { ROLES } from '@shared/schemas/user';
 import {
   MAIN_LINE,
   STATUS_MOVES,
@@ -11,7 +11,7 @@ import {
   movesFrom,
   timeline,
   type StatusActor,
-} from '../../shared/blankets/status';
+} from '@shared/blankets/status';
 
 const maker: StatusActor = { role: 'volunteer', isMaker: true };
 const otherVolunteer: StatusActor = { role: 'volunteer', isMaker: false };

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { fitEdge, fitDown, fitUp, nearestFit } from '../../shared/border/fit';
+import { fitEdge, fitDown, fitUp, nearestFit } from '@shared/border/fit';
 
 const legal = (x: number, n: number, m: number) => x >= m && x >= 1 && (x - m) % n === 0;
 

@@ -1,11 +1,11 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { BORDER_LIBRARY, borderById, borderDepthCm, instructionsUk, BORDER_YARN_ADVICE } from '../../shared/border/library';
-import { fitEdge } from '../../shared/border/fit';
-import { planBorder } from '../../shared/border/plan';
-import { EDGE_ORDER } from '../../shared/border/round';
-import { usToUkText, ukToUsText } from '../../shared/sizing/stitch-names';
-import { usLabelForMm } from '../../shared/sizing/hooks';
+import { BORDER_LIBRARY, borderById, borderDepthCm, instructionsUk, BORDER_YARN_ADVICE } from '@shared/border/library';
+import { fitEdge } from '@shared/border/fit';
+import { planBorder } from '@shared/border/plan';
+import { EDGE_ORDER } from '@shared/border/round';
+import { usToUkText, ukToUsText } from '@shared/sizing/stitch-names';
+import { usLabelForMm } from '@shared/sizing/hooks';
 
 const count = (text: string, token: string) =>
   (text.match(new RegExp(`(?<![A-Za-z])${token}(?![A-Za-z])`, 'gi')) ?? []).length;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { planBorder } from '../../shared/border/plan';
+import { planBorder } from '@shared/border/plan';
 
 const centred = (p: ReturnType<typeof planBorder>) => p.cornerReport.filter((c) => c.centred).length;
 

@@ -1,8 +1,8 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { planBorder } from '../../shared/border/plan';
-import { EDGE_ORDER } from '../../shared/border/round';
-import { ROW_TYPES } from '../../shared/border/row-ends';
+import { planBorder } from '@shared/border/plan';
+import { EDGE_ORDER } from '@shared/border/round';
+import { ROW_TYPES } from '@shared/border/row-ends';
 
 describe('planBorder, per edge', () => {
   const plan = planBorder({ across: 30, rows: 23, multiple: 4, offset: 1, strategy: 'add' });

@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { fitEdge } from '../../shared/border/fit';
-import { fitRound, roundTotal, shareRoundChange, simulateRound, EDGE_ORDER } from '../../shared/border/round';
+import { fitEdge } from '@shared/border/fit';
+import { fitRound, roundTotal, shareRoundChange, simulateRound, EDGE_ORDER } from '@shared/border/round';
 
 describe('roundTotal', () => {
   it('adds the four edges and 3 stitches for each of the 4 corners', () => {

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { foundationCounts, sideStitches, rowCount, ROW_END_ALLOWANCES, ROW_TYPES } from '../../shared/border/row-ends';
+import { foundationCounts, sideStitches, rowCount, ROW_END_ALLOWANCES, ROW_TYPES } from '@shared/border/row-ends';
 
 describe('foundation counts', () => {
   it('plain rows take one stitch each; top and bottom one per stitch across', () => {

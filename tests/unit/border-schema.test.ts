@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { BorderFitRequestSchema, SizeFromGaugeRequestSchema, YarnEstimateRequestSchema } from '../../shared/schemas/border-fit';
+import { BorderFitRequestSchema, SizeFromGaugeRequestSchema, YarnEstimateRequestSchema } from '@shared/schemas/border-fit';
 
 const ok = { across: 30, rows: 23, multiple: 4, offset: 1 };
 const issues = (value: unknown) => {

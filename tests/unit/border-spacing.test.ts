@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { perStitch, spreadPositions } from '../../shared/border/spacing';
+import { perStitch, spreadPositions } from '@shared/border/spacing';
 
 /** Plain stitches before the first change, between changes, and after the last. */
 function runs(n: number, positions: number[]): number[] {

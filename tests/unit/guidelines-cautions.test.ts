@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { POPULATIONS } from '../../shared/schemas/blanket';
-import { cautionsFor } from '../../shared/guidelines/cautions';
+import { POPULATIONS } from '@shared/schemas/blanket';
+import { cautionsFor } from '@shared/guidelines/cautions';
 
 const ids = (p: (typeof POPULATIONS)[number]) => cautionsFor(p).map((c) => c.id);
 

@@ -8,15 +8,15 @@ import {
   type BlanketFields,
   type Feature,
   type Fibre,
-} from '../../shared/schemas/blanket';
+} from '@shared/schemas/blanket';
 import {
   GuidelineCheckResultSchema,
   GuidelineSetSchema,
   RULE_IDS,
   type GuidelineSet,
-} from '../../shared/schemas/guidelines';
-import { check, REMOVABLE_FEATURES } from '../../shared/guidelines/check';
-import { defaultGuidelines } from '../../shared/guidelines/defaults';
+} from '@shared/schemas/guidelines';
+import { check, REMOVABLE_FEATURES } from '@shared/guidelines/check';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
 
 const cm = (lo: number, hi: number) => fc.double({ min: lo, max: hi, noNaN: true, noDefaultInfinity: true });
 

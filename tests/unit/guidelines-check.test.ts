@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import type { BlanketFields } from '../../shared/schemas/blanket';
-import { GuidelineCheckResultSchema, type GuidelineSet } from '../../shared/schemas/guidelines';
-import { check, REMOVABLE_FEATURES } from '../../shared/guidelines/check';
-import { defaultGuidelines } from '../../shared/guidelines/defaults';
+import type { BlanketFields } from '@shared/schemas/blanket';
+import { GuidelineCheckResultSchema, type GuidelineSet } from '@shared/schemas/guidelines';
+import { check, REMOVABLE_FEATURES } from '@shared/guidelines/check';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
 import { plainBlanket } from '../fixtures/blankets';
 import { roundWard as ward } from '../fixtures/guidelines';
 

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { FEATURES, POPULATIONS, type BlanketFields, type Population } from '../../shared/schemas/blanket';
-import { GuidelineSetSchema } from '../../shared/schemas/guidelines';
-import { check } from '../../shared/guidelines/check';
-import { defaultGuidelines } from '../../shared/guidelines/defaults';
-import { sizeCategoryRow } from '../../shared/guidelines/size-categories';
-import type { SizeCategory } from '../../shared/schemas/blanket';
+import { FEATURES, POPULATIONS, type BlanketFields, type Population } from '@shared/schemas/blanket';
+import { GuidelineSetSchema } from '@shared/schemas/guidelines';
+import { check } from '@shared/guidelines/check';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
+import { sizeCategoryRow } from '@shared/guidelines/size-categories';
+import type { SizeCategory } from '@shared/schemas/blanket';
 import { plainBlanket } from '../fixtures/blankets';
 
 /** A blanket of the category's nominal size, plain acrylic, from a smoke- and pet-free home. */

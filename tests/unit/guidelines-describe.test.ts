@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import type { GuidelineSet } from '../../shared/schemas/guidelines';
-import { describeGuidelines } from '../../shared/guidelines/describe';
-import { defaultGuidelines } from '../../shared/guidelines/defaults';
+import type { GuidelineSet } from '@shared/schemas/guidelines';
+import { describeGuidelines } from '@shared/guidelines/describe';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
 import { roundWard } from '../fixtures/guidelines';
 
 // Its lists are out of the house order and shorter than the check tests' ward, so the lines show the ordering and the joining words.

@@ -4,8 +4,8 @@ import {
   GuidelineSetSchema,
   PutRecipientGuidelinesBodySchema,
   RULE_IDS,
-} from '../../shared/schemas/guidelines';
-import { defaultGuidelines } from '../../shared/guidelines/defaults';
+} from '@shared/schemas/guidelines';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
 
 const valid = () => defaultGuidelines('preemie');
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { SIZE_CATEGORIES } from '../../shared/schemas/blanket';
-import { toCm } from '../../shared/sizing/units';
-import { SIZE_CATEGORY_TABLE, sizeCategoryFor, sizeCategoryRow } from '../../shared/guidelines/size-categories';
+import { SIZE_CATEGORIES } from '@shared/schemas/blanket';
+import { toCm } from '@shared/sizing/units';
+import { SIZE_CATEGORY_TABLE, sizeCategoryFor, sizeCategoryRow } from '@shared/guidelines/size-categories';
 
 const inchesToCm = (inches: number) => toCm(inches, 'in');
 

@@ -2,10 +2,10 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { layoutDrawing } from '../../src/features/planner/components/drawing-geometry';
 import { computePlanner, parsePatternText, toPlanInput, DEFAULTS, defaultDepth, type PlannerState } from '../../src/features/planner/hooks/use-planner';
-import { planBorder } from '../../shared/border/plan';
-import { BORDER_LIBRARY, borderById } from '../../shared/border/library';
-import { EDGE_ORDER } from '../../shared/border/round';
-import { PlanInputSchema } from '../../shared/schemas/plan';
+import { planBorder } from '@shared/border/plan';
+import { BORDER_LIBRARY, borderById } from '@shared/border/library';
+import { EDGE_ORDER } from '@shared/border/round';
+import { PlanInputSchema } from '@shared/schemas/plan';
 
 const shell = borderById('five-dc-shell')!;
 const state = (patch: Partial<PlannerState> = {}): PlannerState => ({ ...DEFAULTS, borderDepth: defaultDepth(shell, 'cm'), depthTouched: false, ...patch });

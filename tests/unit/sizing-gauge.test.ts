@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { bodyCountsFromGauge, finishedSizeFromCounts, gaugePerCm } from '../../shared/sizing/gauge';
-import { startingChain } from '../../shared/sizing/turning-chains';
+import { bodyCountsFromGauge, finishedSizeFromCounts, gaugePerCm } from '@shared/sizing/gauge';
+import { startingChain } from '@shared/sizing/turning-chains';
 
 describe('gaugePerCm', () => {
   it('reads "per 4 in" as 10.16 cm, not 10 cm', () => {

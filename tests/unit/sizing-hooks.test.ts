@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { HOOK_SIZES, mmForUsLabel, usLabelForMm } from '../../shared/sizing/hooks';
-import { yarnWeight, YARN_WEIGHTS } from '../../shared/sizing/yarn-weights';
+import { HOOK_SIZES, mmForUsLabel, usLabelForMm } from '@shared/sizing/hooks';
+import { yarnWeight, YARN_WEIGHTS } from '@shared/sizing/yarn-weights';
 
 describe('hook look-ups', () => {
   it('find the US label for a size in mm, brand variants included', () => {

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { estimateYarn, yardsPerSqIn, YARN_PER_AREA } from '../../shared/sizing/yarn-estimate';
+import { estimateYarn, yardsPerSqIn, YARN_PER_AREA } from '@shared/sizing/yarn-estimate';
 
 describe('yarn per area table', () => {
   it('keeps the measured #4 value and scales the others by gauge midpoint', () => {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { BlanketStatus, Feature, Fibre } from '../../../shared/schemas/blanket';
+import type { BlanketStatus, Feature, Fibre } from '@shared/schemas/blanket';
 import type { BlanketEvent } from './blanket-event';
 import type { Photo } from './photo';
 

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { SizeCategory } from '../../../shared/schemas/blanket';
+import type { SizeCategory } from '@shared/schemas/blanket';
 import type { Recipient } from './recipient';
 
 /** "The newborn unit wants 40 preemie blankets by 1 March": one line of a recipient's wish list. */

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { SizeCategory } from '../../../shared/schemas/blanket';
+import type { SizeCategory } from '@shared/schemas/blanket';
 import type { Need } from './need';
 
 export type PledgeStatus = 'active' | 'cancelled' | 'fulfilled';

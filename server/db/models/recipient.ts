@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { Population } from '../../../shared/schemas/blanket';
+import type { Population } from '@shared/schemas/blanket';
 import type { Need } from './need';
 
 export const RECIPIENT_KINDS = ['neonatal-unit', 'childrens-ward', 'family-shelter', 'care-home', 'hospice', 'other'] as const;

@@ -1,10 +1,10 @@
 import { Recipient } from '../models/recipient';
 import { Need } from '../models/need';
 import { Site } from '../models/site';
-import { defaultGuidelines } from '../../../shared/guidelines/defaults';
-import type { GuidelineSet } from '../../../shared/schemas/guidelines';
-import type { Population, SizeCategory } from '../../../shared/schemas/blanket';
-import type { RecipientKind } from '../../../shared/schemas/recipient';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
+import type { GuidelineSet } from '@shared/schemas/guidelines';
+import type { Population, SizeCategory } from '@shared/schemas/blanket';
+import type { RecipientKind } from '@shared/schemas/recipient';
 import { addSeedStep } from './demo';
 import { daysFrom, isoDay } from './seed-context';
 

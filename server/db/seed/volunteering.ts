@@ -10,10 +10,10 @@ import { addSeedStep } from './demo';
 import { daysFrom, isoDay, type SeedContext } from './seed-context';
 import { uniqueBlanketCode } from '../../modules/blankets/blanket-code';
 import { guidelinesOf } from '../../modules/pledges/recipient-brief';
-import { MAIN_LINE, findMove } from '../../../shared/blankets/status';
-import { sizeCategoryRow } from '../../../shared/guidelines/size-categories';
-import type { BlanketStatus, BodyStitch, Feature, Fibre, SizeCategory } from '../../../shared/schemas/blanket';
-import type { PledgeStatus } from '../../../shared/schemas/pledge';
+import { MAIN_LINE, findMove } from '@shared/blankets/status';
+import { sizeCategoryRow } from '@shared/guidelines/size-categories';
+import type { BlanketStatus, BodyStitch, Feature, Fibre, SizeCategory } from '@shared/schemas/blanket';
+import type { PledgeStatus } from '@shared/schemas/pledge';
 
 /**
  * The volunteers' side of the demo: pledges against the recipients' needs, and blankets at every

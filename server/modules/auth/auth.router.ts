@@ -6,7 +6,7 @@ import {
   PasswordResetConfirmSchema,
   PasswordResetRequestSchema,
   RegisterSchema,
-} from '../../../shared/schemas/user';
+} from '@shared/schemas/user';
 import { validate } from '../../middleware/validate';
 import { csrfToken } from '../../auth/csrf';
 import { HttpError } from '../../lib/http-error';

@@ -1,7 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import type { Transaction } from 'sequelize';
 import { Blanket } from '../../db/models/blanket';
-import { CODE_LENGTH, codeFromBytes } from '../../../shared/blankets/code';
+import { CODE_LENGTH, codeFromBytes } from '@shared/blankets/code';
 
 /** With about a million codes, a few hundred blankets collide rarely; ten tries failing means something is wrong. */
 export const MAX_CODE_TRIES = 10;

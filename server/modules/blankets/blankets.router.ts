@@ -1,7 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { validate } from '../../middleware/validate';
-import { IdParamSchema } from '../../../shared/schemas/user';
-import { BlanketCreateSchema, BlanketListQuerySchema, BlanketUpdateSchema, type BlanketListQuery } from '../../../shared/schemas/blanket-log';
+import { IdParamSchema } from '@shared/schemas/user';
+import { BlanketCreateSchema, BlanketListQuerySchema, BlanketUpdateSchema, type BlanketListQuery } from '@shared/schemas/blanket-log';
 import type { RouteDef } from '../route-table';
 import { blanketDetail, createBlanket, listBlankets, updateBlanket } from './blankets.service';
 

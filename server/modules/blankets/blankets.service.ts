@@ -9,7 +9,7 @@ import { Recipient } from '../../db/models/recipient';
 import { Site } from '../../db/models/site';
 import { User } from '../../db/models/user';
 import { HttpError, notFound } from '../../lib/http-error';
-import { pickBlanketFields, type BlanketFields, type BlanketStatus } from '../../../shared/schemas/blanket';
+import { pickBlanketFields, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
 import {
   LOG_FIELDS,
   type BlanketCreate,
@@ -19,9 +19,9 @@ import {
   type BlanketSummary,
   type BlanketUpdate,
   type PhotoView,
-} from '../../../shared/schemas/blanket-log';
-import { checkTransition, isIntakeMove, isMakerEditable, movesFrom, type TransitionRefusal } from '../../../shared/blankets/status';
-import { check, evaluate, type OtherRecipient } from '../../../shared/guidelines/check';
+} from '@shared/schemas/blanket-log';
+import { checkTransition, isIntakeMove, isMakerEditable, movesFrom, type TransitionRefusal } from '@shared/blankets/status';
+import { check, evaluate, type OtherRecipient } from '@shared/guidelines/check';
 import { activeRecipients, guidelinesOf, recipientBrief } from '../pledges/recipient-brief';
 import { readsAll, refreshPledgeStatus, type Actor } from '../pledges/pledges.service';
 import { uniqueBlanketCode } from './blanket-code';

@@ -1,5 +1,5 @@
 import { validate } from '../../middleware/validate';
-import { GuidelineCheckBodySchema } from '../../../shared/schemas/guidelines';
+import { GuidelineCheckBodySchema } from '@shared/schemas/guidelines';
 import type { RouteDef } from '../route-table';
 import { checkAgainst } from './guidelines.service';
 

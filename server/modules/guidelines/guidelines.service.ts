@@ -1,10 +1,10 @@
 import type { Transaction } from 'sequelize';
 import { Recipient } from '../../db/models/recipient';
 import { notFound } from '../../lib/http-error';
-import { check } from '../../../shared/guidelines/check';
-import { cautionsFor, type Caution } from '../../../shared/guidelines/cautions';
-import type { BlanketFields, Population } from '../../../shared/schemas/blanket';
-import type { GuidelineCheckResult, GuidelineSet } from '../../../shared/schemas/guidelines';
+import { check } from '@shared/guidelines/check';
+import { cautionsFor, type Caution } from '@shared/guidelines/cautions';
+import type { BlanketFields, Population } from '@shared/schemas/blanket';
+import type { GuidelineCheckResult, GuidelineSet } from '@shared/schemas/guidelines';
 import { activeRecipientGuidelines, storedGuidelines } from '../recipients/recipients.service';
 
 export interface CheckAnswer extends GuidelineCheckResult {

@@ -8,9 +8,9 @@ import { User } from '../../db/models/user';
 import { HttpError, notFound } from '../../lib/http-error';
 import { enqueueMail } from '../../mail/outbox';
 import { blanketNeedsFixMail } from '../../mail/templates';
-import { checkTransition } from '../../../shared/blankets/status';
-import { sizeCategoryFor } from '../../../shared/guidelines/size-categories';
-import { pickBlanketFields, type BlanketFields, type BlanketStatus } from '../../../shared/schemas/blanket';
+import { checkTransition } from '@shared/blankets/status';
+import { sizeCategoryFor } from '@shared/guidelines/size-categories';
+import { pickBlanketFields, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
 import {
   CHECKLIST_ITEMS,
   RECEIVABLE_STATUSES,
@@ -22,8 +22,8 @@ import {
   type IntakeQueueItem,
   type InspectionBody,
   OUTCOME_LABELS,
-} from '../../../shared/schemas/intake';
-import type { Role } from '../../../shared/schemas/user';
+} from '@shared/schemas/intake';
+import type { Role } from '@shared/schemas/user';
 import { checkAgainst, type CheckAnswer } from '../guidelines/guidelines.service';
 import { eventView } from '../blankets/blankets.service';
 

@@ -1,6 +1,6 @@
 import { CaughtMail } from '../../db/models/caught-mail';
 import { MailMessage } from '../../db/models/mail-message';
-import { IdParamSchema } from '../../../shared/schemas/user';
+import { IdParamSchema } from '@shared/schemas/user';
 import { validate } from '../../middleware/validate';
 import { notFound } from '../../lib/http-error';
 import type { RouteDef } from '../route-table';

@@ -4,7 +4,7 @@ import { randomBytes } from 'node:crypto';
 import sharp from 'sharp';
 import { fileTypeFromBuffer } from 'file-type';
 import { HttpError } from '../../lib/http-error';
-import { PHOTO_MIME_TYPES, type PhotoMime } from '../../../shared/schemas/blanket-log';
+import { PHOTO_MIME_TYPES, type PhotoMime } from '@shared/schemas/blanket-log';
 
 /** Photos live in their own folder under UPLOAD_DIR, outside anything served statically. */
 export const PHOTO_FOLDER = 'photos';

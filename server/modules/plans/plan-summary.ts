@@ -1,11 +1,11 @@
-import { borderById, borderDepthCm } from '../../../shared/border/library';
-import { planBorder } from '../../../shared/border/plan';
-import { rowCount } from '../../../shared/border/row-ends';
-import { EDGE_ORDER } from '../../../shared/border/round';
-import { finishedSizeFromCounts } from '../../../shared/sizing/gauge';
-import { fromCm } from '../../../shared/sizing/units';
-import { estimateYarn } from '../../../shared/sizing/yarn-estimate';
-import type { PlanInput, PlanSummary } from '../../../shared/schemas/plan';
+import { borderById, borderDepthCm } from '@shared/border/library';
+import { planBorder } from '@shared/border/plan';
+import { rowCount } from '@shared/border/row-ends';
+import { EDGE_ORDER } from '@shared/border/round';
+import { finishedSizeFromCounts } from '@shared/sizing/gauge';
+import { fromCm } from '@shared/sizing/units';
+import { estimateYarn } from '@shared/sizing/yarn-estimate';
+import type { PlanInput, PlanSummary } from '@shared/schemas/plan';
 
 const signed = (n: number) => (n > 0 ? `+${n}` : n < 0 ? `−${-n}` : 'no change');
 const round1 = (n: number) => Math.round(n * 10) / 10;

@@ -1,6 +1,6 @@
 import { validate } from '../../middleware/validate';
-import { IdParamSchema } from '../../../shared/schemas/user';
-import { PlanCreateSchema } from '../../../shared/schemas/plan';
+import { IdParamSchema } from '@shared/schemas/user';
+import { PlanCreateSchema } from '@shared/schemas/plan';
 import type { RouteDef } from '../route-table';
 import * as service from './plans.service';
 

@@ -2,7 +2,7 @@ import { fn, col } from 'sequelize';
 import { Blanket } from '../../db/models/blanket';
 import { Plan } from '../../db/models/plan';
 import { HttpError, notFound } from '../../lib/http-error';
-import { MAX_PLANS_PER_MAKER, PlanInputSchema, type PlanCreate, type PlanDetail, type PlanInput, type PlanListItem, type PlanSummary } from '../../../shared/schemas/plan';
+import { MAX_PLANS_PER_MAKER, PlanInputSchema, type PlanCreate, type PlanDetail, type PlanInput, type PlanListItem, type PlanSummary } from '@shared/schemas/plan';
 import { summarisePlan } from './plan-summary';
 
 function listItem(p: Plan, blankets: number): PlanListItem {

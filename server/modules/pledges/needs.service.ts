@@ -2,7 +2,7 @@ import { Op } from 'sequelize';
 import { Need } from '../../db/models/need';
 import { Pledge } from '../../db/models/pledge';
 import { Recipient } from '../../db/models/recipient';
-import type { OpenNeed } from '../../../shared/schemas/pledge';
+import type { OpenNeed } from '@shared/schemas/pledge';
 import { recipientBrief, todayIso } from './recipient-brief';
 import type { Actor } from './pledges.service';
 

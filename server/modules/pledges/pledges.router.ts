@@ -1,7 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { validate } from '../../middleware/validate';
-import { IdParamSchema } from '../../../shared/schemas/user';
-import { PledgeCreateSchema, PledgeListQuerySchema, PledgeUpdateSchema, type PledgeListQuery } from '../../../shared/schemas/pledge';
+import { IdParamSchema } from '@shared/schemas/user';
+import { PledgeCreateSchema, PledgeListQuerySchema, PledgeUpdateSchema, type PledgeListQuery } from '@shared/schemas/pledge';
 import type { RouteDef } from '../route-table';
 import { cancelPledge, createPledge, listPledges, pledgeView, updatePledge, visiblePledge } from './pledges.service';
 import { listOpenNeeds } from './needs.service';

@@ -12,8 +12,8 @@ import {
   type PledgeListQuery,
   type PledgeUpdate,
   type PledgeView,
-} from '../../../shared/schemas/pledge';
-import type { BlanketStatus, SizeCategory } from '../../../shared/schemas/blanket';
+} from '@shared/schemas/pledge';
+import type { BlanketStatus, SizeCategory } from '@shared/schemas/blanket';
 import { recipientBrief, todayIso, addDaysIso } from './recipient-brief';
 
 export interface Actor {

@@ -1,8 +1,8 @@
 import type { Transaction } from 'sequelize';
 import { Recipient } from '../../db/models/recipient';
-import type { RecipientBrief } from '../../../shared/schemas/pledge';
-import { describeGuidelines } from '../../../shared/guidelines/describe';
-import { cautionsFor } from '../../../shared/guidelines/cautions';
+import type { RecipientBrief } from '@shared/schemas/pledge';
+import { describeGuidelines } from '@shared/guidelines/describe';
+import { cautionsFor } from '@shared/guidelines/cautions';
 import { storedGuidelines } from '../recipients/recipients.service';
 
 /** A recipient's stored guideline set, read the way the recipients area reads it (defaults when it no longer parses). */

@@ -1,8 +1,8 @@
 import type { Sequelize } from 'sequelize';
 import { z } from 'zod';
 import { validate } from '../../middleware/validate';
-import { IdParamSchema } from '../../../shared/schemas/user';
-import { PutRecipientGuidelinesBodySchema } from '../../../shared/schemas/guidelines';
+import { IdParamSchema } from '@shared/schemas/user';
+import { PutRecipientGuidelinesBodySchema } from '@shared/schemas/guidelines';
 import {
   NeedCreateSchema,
   NeedParamsSchema,
@@ -10,7 +10,7 @@ import {
   RecipientCreateSchema,
   RecipientListQuerySchema,
   RecipientUpdateSchema,
-} from '../../../shared/schemas/recipient';
+} from '@shared/schemas/recipient';
 import type { RouteDef } from '../route-table';
 import * as service from './recipients.service';
 

@@ -3,9 +3,9 @@ import { Recipient } from '../../db/models/recipient';
 import { Need } from '../../db/models/need';
 import { Pledge } from '../../db/models/pledge';
 import { HttpError, notFound } from '../../lib/http-error';
-import { defaultGuidelines } from '../../../shared/guidelines/defaults';
-import { describeGuidelines } from '../../../shared/guidelines/describe';
-import { GuidelineSetSchema, type GuidelineSet } from '../../../shared/schemas/guidelines';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
+import { describeGuidelines } from '@shared/guidelines/describe';
+import { GuidelineSetSchema, type GuidelineSet } from '@shared/schemas/guidelines';
 import type {
   NeedCreate,
   NeedUpdate,
@@ -13,8 +13,8 @@ import type {
   RecipientCreate,
   RecipientUpdate,
   RecipientView,
-} from '../../../shared/schemas/recipient';
-import type { Role } from '../../../shared/schemas/user';
+} from '@shared/schemas/recipient';
+import type { Role } from '@shared/schemas/user';
 
 /** Contact details and delivery notes are for the people who plan deliveries. */
 const seesContacts = (role: Role) => role === 'organiser' || role === 'coordinator';

@@ -1,7 +1,7 @@
 import type { z } from 'zod';
 import { validate } from '../../middleware/validate';
-import { IdParamSchema } from '../../../shared/schemas/user';
-import { SiteCreateSchema, SiteListQuerySchema, SiteUpdateSchema } from '../../../shared/schemas/site';
+import { IdParamSchema } from '@shared/schemas/user';
+import { SiteCreateSchema, SiteListQuerySchema, SiteUpdateSchema } from '@shared/schemas/site';
 import type { RouteDef } from '../route-table';
 import * as service from './sites.service';
 

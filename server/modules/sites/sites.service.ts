@@ -1,6 +1,6 @@
 import { Site } from '../../db/models/site';
 import { HttpError, notFound } from '../../lib/http-error';
-import type { SiteCreate, SiteUpdate, SiteView } from '../../../shared/schemas/site';
+import type { SiteCreate, SiteUpdate, SiteView } from '@shared/schemas/site';
 
 export function siteView(s: Site): SiteView {
   return {

@@ -1,5 +1,5 @@
 import { validate } from '../../middleware/validate';
-import { BorderFitRequestSchema, SizeFromGaugeRequestSchema, YarnEstimateRequestSchema } from '../../../shared/schemas/border-fit';
+import { BorderFitRequestSchema, SizeFromGaugeRequestSchema, YarnEstimateRequestSchema } from '@shared/schemas/border-fit';
 import type { RouteDef } from '../route-table';
 import * as service from './tools.service';
 

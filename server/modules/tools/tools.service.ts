@@ -1,7 +1,7 @@
-import { planBorder, type BorderPlan } from '../../../shared/border/plan';
-import { bodyCountsFromGauge, type BodyCounts } from '../../../shared/sizing/gauge';
-import { estimateYarn, type YarnEstimate } from '../../../shared/sizing/yarn-estimate';
-import type { BorderFitRequest, SizeFromGaugeRequest, YarnEstimateRequest } from '../../../shared/schemas/border-fit';
+import { planBorder, type BorderPlan } from '@shared/border/plan';
+import { bodyCountsFromGauge, type BodyCounts } from '@shared/sizing/gauge';
+import { estimateYarn, type YarnEstimate } from '@shared/sizing/yarn-estimate';
+import type { BorderFitRequest, SizeFromGaugeRequest, YarnEstimateRequest } from '@shared/schemas/border-fit';
 import { HttpError } from '../../lib/http-error';
 
 /**

@@ -1,6 +1,6 @@
 import { User } from '../../db/models/user';
 import { Session } from '../../db/models/session';
-import { IdParamSchema, UserUpdateSchema } from '../../../shared/schemas/user';
+import { IdParamSchema, UserUpdateSchema } from '@shared/schemas/user';
 import { validate } from '../../middleware/validate';
 import { HttpError, notFound } from '../../lib/http-error';
 import type { RouteDef } from '../route-table';

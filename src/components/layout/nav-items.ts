@@ -2,7 +2,7 @@ import type { LucideIcon } from 'lucide-react';
 import { Home, Ruler, Users, Mail } from 'lucide-react';
 import { HeartHandshake, MapPin, ScanLine } from 'lucide-react';
 import { ClipboardList, HandHeart, Layers } from 'lucide-react';
-import type { Role } from '../../../shared/schemas/user';
+import type { Role } from '@shared/schemas/user';
 
 export interface NavItem {
   to: string;

@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
 import { Lock } from 'lucide-react';
 import { useMe } from '@/features/auth/api/get-me';
-import type { Role } from '../../../shared/schemas/user';
+import type { Role } from '@shared/schemas/user';
 import { Loading } from '../ui/spinner';
 import { EmptyState } from '../ui/empty-state';
 

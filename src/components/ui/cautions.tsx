@@ -1,5 +1,5 @@
 import { ShieldAlert, Building2 } from 'lucide-react';
-import type { Caution } from '../../../shared/guidelines/cautions';
+import type { Caution } from '@shared/guidelines/cautions';
 import { cn } from './cn';
 
 /**

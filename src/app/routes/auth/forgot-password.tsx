@@ -1,6 +1,6 @@
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { PasswordResetRequestSchema } from '../../../../shared/schemas/user';
+import { PasswordResetRequestSchema } from '@shared/schemas/user';
 import { useRequestPasswordReset } from '@/features/auth/api/request-password-reset';
 import { Button } from '@/components/ui/button';
 import { Field, Input } from '@/components/ui/field';

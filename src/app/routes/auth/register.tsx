@@ -1,7 +1,7 @@
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Link, useNavigate } from 'react-router-dom';
-import { RegisterSchema } from '../../../../shared/schemas/user';
+import { RegisterSchema } from '@shared/schemas/user';
 import { useRegister } from '@/features/auth/api/register';
 import { Button } from '@/components/ui/button';
 import { Field, Input } from '@/components/ui/field';

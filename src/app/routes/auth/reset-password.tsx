@@ -2,7 +2,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import { useNavigate, useSearchParams } from 'react-router-dom';
-import { PasswordSchema } from '../../../../shared/schemas/user';
+import { PasswordSchema } from '@shared/schemas/user';
 import { useConfirmPasswordReset } from '@/features/auth/api/confirm-password-reset';
 import { Button } from '@/components/ui/button';
 import { Field, Input } from '@/components/ui/field';

@@ -1,7 +1,7 @@
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
-import { LoginSchema } from '../../../../shared/schemas/user';
+import { LoginSchema } from '@shared/schemas/user';
 import { useLogin } from '@/features/auth/api/login';
 import { Button } from '@/components/ui/button';
 import { Field, Input } from '@/components/ui/field';

@@ -11,7 +11,7 @@ import { Alert } from '@/components/ui/alert';
 import { usePeople } from '@/features/people/api/get-people';
 import { useUpdatePerson } from '@/features/people/api/update-person';
 import { useMe } from '@/features/auth/api/get-me';
-import { ROLES, type Role } from '../../../../shared/schemas/user';
+import { ROLES, type Role } from '@shared/schemas/user';
 
 const roleWords: Record<Role, string> = { volunteer: 'Maker', organiser: 'Organiser', coordinator: 'Coordinator' };
 

@@ -13,8 +13,8 @@ import { useIntakeSites } from '@/features/intake/api/get-intake-sites';
 import { useIntakeQueue } from '@/features/intake/api/get-intake-queue';
 import { rememberedSiteId } from '@/features/intake/components/receive-panel';
 import { StatusBadge, categoryText } from '@/features/intake/components/blanket-summary';
-import { formatCm } from '../../../../shared/guidelines/wording';
-import type { IntakeQueueItem } from '../../../../shared/schemas/intake';
+import { formatCm } from '@shared/guidelines/wording';
+import type { IntakeQueueItem } from '@shared/schemas/intake';
 
 const localDay = (d = new Date()) => `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
 const time = (iso: string | null) => (iso ? new Date(iso).toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' }) : '');

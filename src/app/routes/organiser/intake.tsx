@@ -16,10 +16,10 @@ import { BlanketHistory } from '@/features/intake/components/blanket-history';
 import { ReceivePanel } from '@/features/intake/components/receive-panel';
 import { InspectionPanel } from '@/features/intake/components/inspection-panel';
 import { CheckResult } from '@/features/intake/components/check-result';
-import { normaliseCode } from '../../../../shared/blankets/code';
-import { cautionsFor } from '../../../../shared/guidelines/cautions';
-import { codeFromScan, RECEIVABLE_STATUSES, type IntakeBlanketView } from '../../../../shared/schemas/intake';
-import type { Population } from '../../../../shared/schemas/blanket';
+import { normaliseCode } from '@shared/blankets/code';
+import { cautionsFor } from '@shared/guidelines/cautions';
+import { codeFromScan, RECEIVABLE_STATUSES, type IntakeBlanketView } from '@shared/schemas/intake';
+import type { Population } from '@shared/schemas/blanket';
 
 const OUTCOME_WORDS: Partial<Record<IntakeBlanketView['status'], string>> = {
   checked: 'It passed the check and is ready to be assigned.',

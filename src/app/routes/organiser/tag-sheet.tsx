@@ -7,7 +7,7 @@ import { QueryError } from '@/components/ui/query-error';
 import { EmptyState } from '@/components/ui/empty-state';
 import { useTags } from '@/features/intake/api/get-tags';
 import { categoryText } from '@/features/intake/components/blanket-summary';
-import { formatCm, formatIn, isInfantPopulation } from '../../../../shared/guidelines/wording';
+import { formatCm, formatIn, isInfantPopulation } from '@shared/guidelines/wording';
 
 const svgSrc = (svg: string) => `data:image/svg+xml;charset=utf-8,${encodeURIComponent(svg)}`;
 

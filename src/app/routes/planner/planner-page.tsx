@@ -19,9 +19,9 @@ import { YarnPanel } from '@/features/planner/components/yarn-panel';
 import { ReferenceTables } from '@/features/planner/components/reference-tables';
 import { SavedPlans } from '@/features/planner/components/saved-plans';
 import { inTerms } from '@/features/planner/components/terms';
-import { rowCount } from '../../../../shared/border/row-ends';
-import { gaugePerCm } from '../../../../shared/sizing/gauge';
-import type { PlanInput } from '../../../../shared/schemas/plan';
+import { rowCount } from '@shared/border/row-ends';
+import { gaugePerCm } from '@shared/sizing/gauge';
+import type { PlanInput } from '@shared/schemas/plan';
 
 /** Body proportions: from the swatch when there is one, otherwise from typical row heights. */
 function bodyShape(r: PlannerResult): { w: number; h: number; note: string } | null {

@@ -20,9 +20,9 @@ import { PhotoGallery } from '@/features/blankets/components/photo-gallery';
 import { BlanketHistory } from '@/features/blankets/components/blanket-history';
 import { BODY_STITCH_LABELS, sizeLabel, yarnWeightLabel } from '@/features/blankets/components/labels';
 import type { SelfCheck } from '@/features/blankets/hooks/use-self-check';
-import type { BlanketDetail } from '../../../../shared/schemas/blanket-log';
-import { borderById } from '../../../../shared/border/library';
-import { capitalise, featureLabel, fibreLabel, formatCm, formatIn, joinWords } from '../../../../shared/guidelines/wording';
+import type { BlanketDetail } from '@shared/schemas/blanket-log';
+import { borderById } from '@shared/border/library';
+import { capitalise, featureLabel, fibreLabel, formatCm, formatIn, joinWords } from '@shared/guidelines/wording';
 import type { LoggedState } from './log-blanket';
 
 function outcomeOf(b: BlanketDetail): SelfCheck {

@@ -14,7 +14,7 @@ import { useMyPlans } from '@/features/blankets/api/get-my-plans';
 import { useUpdateBlanket } from '@/features/blankets/api/update-blanket';
 import { BlanketForm } from '@/features/blankets/components/blanket-form';
 import { toUpdatePayload, type BlanketFormValues } from '@/features/blankets/components/blanket-form-schema';
-import type { RecipientBrief } from '../../../../shared/schemas/pledge';
+import type { RecipientBrief } from '@shared/schemas/pledge';
 
 /** Correcting the log while the blanket is still with its maker; the self-check runs again as they change it. */
 export default function EditBlanketPage() {

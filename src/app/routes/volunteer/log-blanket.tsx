@@ -17,9 +17,9 @@ import { useCreateBlanket } from '@/features/blankets/api/create-blanket';
 import { uploadPhotos } from '@/features/blankets/api/upload-photos';
 import { BlanketForm } from '@/features/blankets/components/blanket-form';
 import { toCreatePayload, type BlanketFormValues } from '@/features/blankets/components/blanket-form-schema';
-import { MAX_PHOTOS_PER_BLANKET } from '../../../../shared/schemas/blanket-log';
-import type { PledgeView, RecipientBrief } from '../../../../shared/schemas/pledge';
-import type { PlanListItem } from '../../../../shared/schemas/plan';
+import { MAX_PHOTOS_PER_BLANKET } from '@shared/schemas/blanket-log';
+import type { PledgeView, RecipientBrief } from '@shared/schemas/pledge';
+import type { PlanListItem } from '@shared/schemas/plan';
 
 export interface LoggedState {
   logged?: boolean;

@@ -15,7 +15,7 @@ import { needKeys } from '@/features/needs/api/keys';
 import { RecipientNeeds } from '@/features/needs/components/recipient-needs';
 import { NeedsSummary } from '@/features/needs/components/needs-summary';
 import { PledgeForm } from '@/features/pledges/components/pledge-form';
-import type { OpenNeed, PledgeView, RecipientBrief } from '../../../../shared/schemas/pledge';
+import type { OpenNeed, PledgeView, RecipientBrief } from '@shared/schemas/pledge';
 
 /** "What's needed": every open need by recipient, what is promised so far, and a pledge form on each. */
 export default function NeedsPage() {

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, ApiError } from '@/lib/api-client';
-import type { User } from '../../../../shared/schemas/user';
+import type { User } from '@shared/schemas/user';
 import { authKeys } from './keys';
 
 /** The signed-in user, or null when nobody is: a 401 here is an answer, not an error. */

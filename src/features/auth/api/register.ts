@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, forgetCsrfToken } from '@/lib/api-client';
-import type { User } from '../../../../shared/schemas/user';
+import type { User } from '@shared/schemas/user';
 import { authKeys } from './keys';
 
 export async function register(input: { name: string; email: string; password: string }) {

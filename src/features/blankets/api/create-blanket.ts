@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { BlanketCreateInput, BlanketDetail } from '../../../../shared/schemas/blanket-log';
+import type { BlanketCreateInput, BlanketDetail } from '@shared/schemas/blanket-log';
 import { blanketKeys } from './keys';
 
 export const createBlanket = (body: BlanketCreateInput) =>

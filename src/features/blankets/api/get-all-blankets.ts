@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { BlanketSummary } from '../../../../shared/schemas/blanket-log';
+import type { BlanketSummary } from '@shared/schemas/blanket-log';
 import { blanketKeys } from './keys';
 
 /** Every blanket of the drive; the server answers this in full to organisers and coordinators only. */

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, qs } from '@/lib/api-client';
-import type { BlanketSummary } from '../../../../shared/schemas/blanket-log';
+import type { BlanketSummary } from '@shared/schemas/blanket-log';
 import { blanketKeys } from './keys';
 
 export const getMyBlankets = () => api.get<{ blankets: BlanketSummary[] }>(`/api/blankets${qs({ mine: true })}`).then((r) => r.blankets);

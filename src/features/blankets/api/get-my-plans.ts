@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { PlanListItem } from '../../../../shared/schemas/plan';
+import type { PlanListItem } from '@shared/schemas/plan';
 import { blanketKeys } from './keys';
 
 /** The maker's saved border plans, to attach one to the blanket it was made from. */

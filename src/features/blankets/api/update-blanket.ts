@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { BlanketDetail, BlanketUpdate } from '../../../../shared/schemas/blanket-log';
+import type { BlanketDetail, BlanketUpdate } from '@shared/schemas/blanket-log';
 import { blanketKeys } from './keys';
 
 export const updateBlanket = ({ id, ...body }: BlanketUpdate & { id: number }) =>

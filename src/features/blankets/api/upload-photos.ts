@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { PhotoView } from '../../../../shared/schemas/blanket-log';
+import type { PhotoView } from '@shared/schemas/blanket-log';
 import { blanketKeys } from './keys';
 
 export interface UploadPhotosInput {

@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { FeatureSchema, MAX_SIDE_CM, YarnWeightSchema, BodyStitchSchema, LabelNameSchema, type BlanketFields } from '../../../../shared/schemas/blanket';
-import { BlanketCreateSchema, INITIAL_STATUSES, type BlanketCreateInput, type BlanketUpdate } from '../../../../shared/schemas/blanket-log';
-import { fromCm, toCm, type LengthUnit } from '../../../../shared/sizing/units';
+import { FeatureSchema, MAX_SIDE_CM, YarnWeightSchema, BodyStitchSchema, LabelNameSchema, type BlanketFields } from '@shared/schemas/blanket';
+import { BlanketCreateSchema, INITIAL_STATUSES, type BlanketCreateInput, type BlanketUpdate } from '@shared/schemas/blanket-log';
+import { fromCm, toCm, type LengthUnit } from '@shared/sizing/units';
 
 const S = BlanketCreateSchema.shape;
 

@@ -1,5 +1,5 @@
-import { STATUS_LABELS } from '../../../../shared/blankets/status';
-import type { BlanketEventView } from '../../../../shared/schemas/blanket-log';
+import { STATUS_LABELS } from '@shared/blankets/status';
+import type { BlanketEventView } from '@shared/schemas/blanket-log';
 
 const when = (iso: string) =>
   new Date(iso).toLocaleString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });

@@ -15,10 +15,10 @@ import { Button } from '@/components/ui/button';
 import { Field, Input, Select } from '@/components/ui/field';
 import { formatDay } from '@/components/ui/format-day';
 import { cn } from '@/components/ui/cn';
-import { BLANKET_STATUSES, type BlanketStatus } from '../../../../shared/schemas/blanket';
-import type { BlanketSummary } from '../../../../shared/schemas/blanket-log';
-import { STATUS_LABELS } from '../../../../shared/blankets/status';
-import { formatCm } from '../../../../shared/guidelines/wording';
+import { BLANKET_STATUSES, type BlanketStatus } from '@shared/schemas/blanket';
+import type { BlanketSummary } from '@shared/schemas/blanket-log';
+import { STATUS_LABELS } from '@shared/blankets/status';
+import { formatCm } from '@shared/guidelines/wording';
 import { StatusBadge } from './status-badge';
 import { StatusTimeline } from './status-timeline';
 

@@ -1,7 +1,7 @@
-import type { BodyStitch, SizeCategory } from '../../../../shared/schemas/blanket';
-import { YARN_WEIGHTS } from '../../../../shared/sizing/yarn-weights';
-import { sizeCategoryRow } from '../../../../shared/guidelines/size-categories';
-import { capitalise } from '../../../../shared/guidelines/wording';
+import type { BodyStitch, SizeCategory } from '@shared/schemas/blanket';
+import { YARN_WEIGHTS } from '@shared/sizing/yarn-weights';
+import { sizeCategoryRow } from '@shared/guidelines/size-categories';
+import { capitalise } from '@shared/guidelines/wording';
 
 /** Body stitches in plain words; the abbreviation stays because patterns use it. */
 export const BODY_STITCH_LABELS: Record<BodyStitch, string> = {

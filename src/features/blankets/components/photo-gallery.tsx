@@ -3,7 +3,7 @@ import { Trash2 } from 'lucide-react';
 import { Button } from '@/components/ui/button';
 import { Alert } from '@/components/ui/alert';
 import { ProgressBar } from '@/components/ui/progress-bar';
-import { MAX_PHOTOS_PER_BLANKET, type BlanketDetail } from '../../../../shared/schemas/blanket-log';
+import { MAX_PHOTOS_PER_BLANKET, type BlanketDetail } from '@shared/schemas/blanket-log';
 import { useUploadPhotos } from '../api/upload-photos';
 import { useDeletePhoto } from '../api/delete-photo';
 import { PhotoPicker, photoProblems } from './photo-picker';

@@ -1,9 +1,9 @@
 import { CheckCircle2, ClipboardCheck, Wrench, XCircle } from 'lucide-react';
 import { Cautions } from '@/components/ui/cautions';
 import { cn } from '@/components/ui/cn';
-import { joinWords } from '../../../../shared/guidelines/wording';
-import type { Verdict } from '../../../../shared/schemas/guidelines';
-import type { Caution } from '../../../../shared/schemas/pledge';
+import { joinWords } from '@shared/guidelines/wording';
+import type { Verdict } from '@shared/schemas/guidelines';
+import type { Caution } from '@shared/schemas/pledge';
 import type { SelfCheck } from '../hooks/use-self-check';
 
 /** The check's verdicts as a maker hears them at home, before anything is decided at intake. */

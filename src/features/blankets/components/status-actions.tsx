@@ -3,8 +3,8 @@ import { Button, ButtonLink } from '@/components/ui/button';
 import { Field, Select, Textarea } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { serverFieldErrors } from '@/components/ui/form-errors';
-import type { BlanketDetail, MoveView } from '../../../../shared/schemas/blanket-log';
-import { MAX_REASON_LENGTH } from '../../../../shared/blankets/status';
+import type { BlanketDetail, MoveView } from '@shared/schemas/blanket-log';
+import { MAX_REASON_LENGTH } from '@shared/blankets/status';
 import { useUpdateBlanket } from '../api/update-blanket';
 
 export interface DropOffSite {

@@ -1,6 +1,6 @@
 import { Badge, type Tone } from '@/components/ui/badge';
-import type { BlanketStatus } from '../../../../shared/schemas/blanket';
-import { STATUS_LABELS } from '../../../../shared/blankets/status';
+import type { BlanketStatus } from '@shared/schemas/blanket';
+import { STATUS_LABELS } from '@shared/blankets/status';
 
 const TONES: Record<BlanketStatus, Tone> = {
   in_progress: 'neutral',

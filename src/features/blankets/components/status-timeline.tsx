@@ -1,7 +1,7 @@
 import { Check } from 'lucide-react';
 import { cn } from '@/components/ui/cn';
-import type { BlanketStatus } from '../../../../shared/schemas/blanket';
-import { STATUS_LABELS, timeline, type TimelineStep } from '../../../../shared/blankets/status';
+import type { BlanketStatus } from '@shared/schemas/blanket';
+import { STATUS_LABELS, timeline, type TimelineStep } from '@shared/blankets/status';
 
 const stateWords = { done: 'done', current: 'now', upcoming: 'still to come' } as const;
 

@@ -1,8 +1,8 @@
 import { useMemo } from 'react';
-import { BlanketFieldsSchema, type BlanketFields } from '../../../../shared/schemas/blanket';
-import type { GuidelineCheckResult } from '../../../../shared/schemas/guidelines';
-import type { RecipientBrief } from '../../../../shared/schemas/pledge';
-import { check, evaluate } from '../../../../shared/guidelines/check';
+import { BlanketFieldsSchema, type BlanketFields } from '@shared/schemas/blanket';
+import type { GuidelineCheckResult } from '@shared/schemas/guidelines';
+import type { RecipientBrief } from '@shared/schemas/pledge';
+import { check, evaluate } from '@shared/guidelines/check';
 
 export type SelfCheck =
   | { state: 'incomplete'; missing: string[] }

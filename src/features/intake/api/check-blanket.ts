@@ -1,8 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { Caution } from '../../../../shared/guidelines/cautions';
-import type { BlanketFields, Population } from '../../../../shared/schemas/blanket';
-import type { GuidelineCheckResult, GuidelineSet } from '../../../../shared/schemas/guidelines';
+import type { Caution } from '@shared/guidelines/cautions';
+import type { BlanketFields, Population } from '@shared/schemas/blanket';
+import type { GuidelineCheckResult, GuidelineSet } from '@shared/schemas/guidelines';
 import { intakeKeys } from './keys';
 
 export interface CheckAnswer extends GuidelineCheckResult {

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { IntakeQueue } from '../../../../shared/schemas/intake';
+import type { IntakeQueue } from '@shared/schemas/intake';
 import { intakeKeys } from './keys';
 
 export const getIntakeQueue = (siteId: number, date: string) => api.get<{ queue: IntakeQueue }>(`/api/intake/queue?siteId=${siteId}&date=${date}`).then((r) => r.queue);

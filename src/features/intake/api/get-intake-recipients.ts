@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { RecipientView } from '../../../../shared/schemas/recipient';
+import type { RecipientView } from '@shared/schemas/recipient';
 import { intakeKeys } from './keys';
 
 export type IntakeRecipient = Pick<RecipientView, 'id' | 'name' | 'population' | 'kind'>;

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { SiteView } from '../../../../shared/schemas/site';
+import type { SiteView } from '@shared/schemas/site';
 import { intakeKeys } from './keys';
 
 /** The open drop-off sites an organiser can receive at. */

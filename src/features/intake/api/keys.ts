@@ -1,4 +1,4 @@
-import type { BlanketFields } from '../../../../shared/schemas/blanket';
+import type { BlanketFields } from '@shared/schemas/blanket';
 
 export const intakeKeys = {
   all: ['intake'] as const,

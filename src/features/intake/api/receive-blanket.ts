@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { IntakeBody } from '../../../../shared/schemas/intake';
+import type { IntakeBody } from '@shared/schemas/intake';
 import type { BlanketWithCheck } from './get-blanket-by-code';
 import { intakeKeys } from './keys';
 

@@ -1,6 +1,6 @@
 import { CheckCircle2, Info, Wrench, XCircle, ArrowRightLeft } from 'lucide-react';
-import { VERDICT_TEXT } from '../../../../shared/guidelines/wording';
-import type { Verdict } from '../../../../shared/schemas/guidelines';
+import { VERDICT_TEXT } from '@shared/guidelines/wording';
+import type { Verdict } from '@shared/schemas/guidelines';
 import type { CheckAnswer } from '../api/check-blanket';
 import { cn } from '@/components/ui/cn';
 

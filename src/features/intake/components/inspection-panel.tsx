@@ -7,9 +7,9 @@ import { Cautions } from '@/components/ui/cautions';
 import { Loading } from '@/components/ui/spinner';
 import { cn } from '@/components/ui/cn';
 import { ApiError } from '@/lib/api-client';
-import { cautionsFor } from '../../../../shared/guidelines/cautions';
-import { featureLabel, fibreLabel, isInfantPopulation, yarnWeightName } from '../../../../shared/guidelines/wording';
-import { FEATURES, FIBRES, YARN_WEIGHTS, pickBlanketFields, type BlanketFields, type Feature, type Fibre } from '../../../../shared/schemas/blanket';
+import { cautionsFor } from '@shared/guidelines/cautions';
+import { featureLabel, fibreLabel, isInfantPopulation, yarnWeightName } from '@shared/guidelines/wording';
+import { FEATURES, FIBRES, YARN_WEIGHTS, pickBlanketFields, type BlanketFields, type Feature, type Fibre } from '@shared/schemas/blanket';
 import {
   CHECKLIST_ITEMS,
   OUTCOME_LABELS,
@@ -18,7 +18,7 @@ import {
   type Checklist,
   type InspectionOutcome,
   type IntakeBlanketView,
-} from '../../../../shared/schemas/intake';
+} from '@shared/schemas/intake';
 import { useCheckBlanket } from '../api/check-blanket';
 import { useInspectBlanket } from '../api/inspect-blanket';
 import { useIntakeRecipients } from '../api/get-intake-recipients';

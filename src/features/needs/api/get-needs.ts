@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { OpenNeed } from '../../../../shared/schemas/pledge';
+import type { OpenNeed } from '@shared/schemas/pledge';
 import { needKeys } from './keys';
 
 export const getNeeds = () => api.get<{ needs: OpenNeed[] }>('/api/needs').then((r) => r.needs);

@@ -1,8 +1,8 @@
 import { Badge } from '@/components/ui/badge';
 import { formatDay } from '@/components/ui/format-day';
-import type { OpenNeed } from '../../../../shared/schemas/pledge';
-import { sizeCategoryRow } from '../../../../shared/guidelines/size-categories';
-import { capitalise } from '../../../../shared/guidelines/wording';
+import type { OpenNeed } from '@shared/schemas/pledge';
+import { sizeCategoryRow } from '@shared/guidelines/size-categories';
+import { capitalise } from '@shared/guidelines/wording';
 
 /** Pledged against wanted for every open need in one table, gaps and over-pledging marked. */
 export function NeedsSummary({ needs }: { needs: OpenNeed[] }) {

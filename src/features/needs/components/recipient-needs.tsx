@@ -5,10 +5,10 @@ import { Badge } from '@/components/ui/badge';
 import { ProgressBar } from '@/components/ui/progress-bar';
 import { Cautions } from '@/components/ui/cautions';
 import { daysUntil, formatDay } from '@/components/ui/format-day';
-import { POPULATION_LABELS } from '../../../../shared/schemas/blanket';
-import type { OpenNeed, RecipientBrief } from '../../../../shared/schemas/pledge';
-import { sizeCategoryRow } from '../../../../shared/guidelines/size-categories';
-import { capitalise } from '../../../../shared/guidelines/wording';
+import { POPULATION_LABELS } from '@shared/schemas/blanket';
+import type { OpenNeed, RecipientBrief } from '@shared/schemas/pledge';
+import { sizeCategoryRow } from '@shared/guidelines/size-categories';
+import { capitalise } from '@shared/guidelines/wording';
 
 function NeedRow({ need, action }: { need: OpenNeed; action?: ReactNode }) {
   const days = daysUntil(need.deadline);

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { Role } from '../../../../shared/schemas/user';
+import type { Role } from '@shared/schemas/user';
 import { peopleKeys } from './keys';
 
 export interface Person {

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { Role } from '../../../../shared/schemas/user';
+import type { Role } from '@shared/schemas/user';
 import { peopleKeys } from './keys';
 
 export const updatePerson = ({ id, ...patch }: { id: number; role?: Role; active?: boolean }) =>

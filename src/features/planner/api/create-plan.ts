@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { PlanDetail, PlanInputDraft } from '../../../../shared/schemas/plan';
+import type { PlanDetail, PlanInputDraft } from '@shared/schemas/plan';
 import { planKeys } from './keys';
 
 export const createPlan = (body: { name: string; input: PlanInputDraft }) =>

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { PlanDetail } from '../../../../shared/schemas/plan';
+import type { PlanDetail } from '@shared/schemas/plan';
 import { planKeys } from './keys';
 
 export const getPlan = (id: number) => api.get<{ plan: PlanDetail }>(`/api/plans/${id}`).then((r) => r.plan);

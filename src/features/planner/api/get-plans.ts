@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { PlanListItem } from '../../../../shared/schemas/plan';
+import type { PlanListItem } from '@shared/schemas/plan';
 import { planKeys } from './keys';
 
 export const getPlans = () => api.get<{ plans: PlanListItem[] }>('/api/plans').then((r) => r.plans);

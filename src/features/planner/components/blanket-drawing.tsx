@@ -1,7 +1,7 @@
 import { useEffect, useId, useMemo, useRef, useState } from 'react';
-import type { BorderPlan } from '../../../../shared/border/plan';
-import type { BorderPattern } from '../../../../shared/border/library';
-import { EDGE_ORDER, type EdgeName } from '../../../../shared/border/round';
+import type { BorderPlan } from '@shared/border/plan';
+import type { BorderPattern } from '@shared/border/library';
+import { EDGE_ORDER, type EdgeName } from '@shared/border/round';
 import { CORNER_MARK_DISTANCE, fanPath, fanSpokes, f2, layoutDrawing, outward, type RepeatShape } from './drawing-geometry';
 
 interface Props {

@@ -1,6 +1,6 @@
 import { Card, CardTitle } from '@/components/ui/card';
 import { Field, Input } from '@/components/ui/field';
-import { ROW_END_ALLOWANCES } from '../../../../shared/border/row-ends';
+import { ROW_END_ALLOWANCES } from '@shared/border/row-ends';
 import { ROW_PRESETS, type FieldErrors, type PlannerState, type RowPresetId } from '../hooks/use-planner';
 import { ChoiceGroup } from './choice-group';
 import { inTerms } from './terms';

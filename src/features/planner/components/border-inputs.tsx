@@ -1,9 +1,9 @@
 import { Card, CardTitle } from '@/components/ui/card';
 import { Field, Select } from '@/components/ui/field';
 import { Badge } from '@/components/ui/badge';
-import { BORDER_LIBRARY, BORDER_YARN_ADVICE, borderDepthCm, type BorderPattern } from '../../../../shared/border/library';
+import { BORDER_LIBRARY, BORDER_YARN_ADVICE, borderDepthCm, type BorderPattern } from '@shared/border/library';
 import type { PlannerState } from '../hooks/use-planner';
-import { usLabelForMm } from '../../../../shared/sizing/hooks';
+import { usLabelForMm } from '@shared/sizing/hooks';
 import { ChoiceGroup } from './choice-group';
 import { SafetyNotes } from './safety-notes';
 import { inTerms } from './terms';

@@ -1,8 +1,8 @@
-import type { BorderPlan } from '../../../../shared/border/plan';
-import type { BorderPattern } from '../../../../shared/border/library';
-import { CORNER_STITCHES } from '../../../../shared/border/row-ends';
-import { CORNER_AFTER, EDGE_ORDER, type CornerName, type EdgeName } from '../../../../shared/border/round';
-import { perStitch } from '../../../../shared/border/spacing';
+import type { BorderPlan } from '@shared/border/plan';
+import type { BorderPattern } from '@shared/border/library';
+import { CORNER_STITCHES } from '@shared/border/row-ends';
+import { CORNER_AFTER, EDGE_ORDER, type CornerName, type EdgeName } from '@shared/border/round';
+import { perStitch } from '@shared/border/spacing';
 
 /*
  * Layout of the blanket drawing, kept apart from the SVG so it can be reasoned about on its own.

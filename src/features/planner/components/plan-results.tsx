@@ -1,8 +1,8 @@
 import { Card, CardTitle } from '@/components/ui/card';
 import { Badge } from '@/components/ui/badge';
-import type { BorderPlan } from '../../../../shared/border/plan';
-import { instructionsUk, type BorderPattern } from '../../../../shared/border/library';
-import { EDGE_ORDER, type CornerName } from '../../../../shared/border/round';
+import type { BorderPlan } from '@shared/border/plan';
+import { instructionsUk, type BorderPattern } from '@shared/border/library';
+import { EDGE_ORDER, type CornerName } from '@shared/border/round';
 import type { Terms } from '../hooks/use-planner';
 import { multipleText } from './border-inputs';
 import { inTerms, signed } from './terms';

@@ -1,10 +1,10 @@
 import type { ReactNode } from 'react';
 import { ChevronDown } from 'lucide-react';
-import { CYC_SOURCE, REGIONAL_NAMES_SOURCE, REGIONAL_YARN_NAMES, YARN_WEIGHTS, CATEGORY_6_HOOK_MM_ALTERNATIVE, type Range } from '../../../../shared/sizing/yarn-weights';
-import { HOOK_CHART_SOURCE, HOOK_SIZES } from '../../../../shared/sizing/hooks';
-import { ROW_END_ALLOWANCES, CORNER_STITCHES } from '../../../../shared/border/row-ends';
-import { TURNING_CHAINS, TURNING_CHAIN_SOURCE } from '../../../../shared/sizing/turning-chains';
-import { US_TO_UK, US_UK_SOURCE } from '../../../../shared/sizing/stitch-names';
+import { CYC_SOURCE, REGIONAL_NAMES_SOURCE, REGIONAL_YARN_NAMES, YARN_WEIGHTS, CATEGORY_6_HOOK_MM_ALTERNATIVE, type Range } from '@shared/sizing/yarn-weights';
+import { HOOK_CHART_SOURCE, HOOK_SIZES } from '@shared/sizing/hooks';
+import { ROW_END_ALLOWANCES, CORNER_STITCHES } from '@shared/border/row-ends';
+import { TURNING_CHAINS, TURNING_CHAIN_SOURCE } from '@shared/sizing/turning-chains';
+import { US_TO_UK, US_UK_SOURCE } from '@shared/sizing/stitch-names';
 import type { Terms } from '../hooks/use-planner';
 
 const mm = (v: number) => v.toLocaleString('en-GB', { maximumFractionDigits: 2 });

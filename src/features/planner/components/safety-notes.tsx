@@ -2,8 +2,8 @@ import { useState } from 'react';
 import { Baby } from 'lucide-react';
 import { Alert } from '@/components/ui/alert';
 import { Checkbox } from '@/components/ui/field';
-import type { BorderPattern } from '../../../../shared/border/library';
-import { cautionsFor } from '../../../../shared/guidelines/cautions';
+import type { BorderPattern } from '@shared/border/library';
+import { cautionsFor } from '@shared/guidelines/cautions';
 
 /** Chain loops stand proud of the edge; some units for babies ask for none at all (common practice). */
 const hasLoops = (b: BorderPattern) => /sl st in \d\w* ch from hook/.test(b.instructions);

@@ -9,7 +9,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { Loading } from '@/components/ui/spinner';
 import { QueryError } from '@/components/ui/query-error';
 import { ApiError } from '@/lib/api-client';
-import type { PlanInput, PlanInputDraft, PlanListItem } from '../../../../shared/schemas/plan';
+import type { PlanInput, PlanInputDraft, PlanListItem } from '@shared/schemas/plan';
 import { usePlans } from '../api/get-plans';
 import { planQueryOptions } from '../api/get-plan';
 import { useCreatePlan } from '../api/create-plan';

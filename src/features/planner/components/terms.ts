@@ -1,4 +1,4 @@
-import { usToUkText } from '../../../../shared/sizing/stitch-names';
+import { usToUkText } from '@shared/sizing/stitch-names';
 import type { Terms } from '../hooks/use-planner';
 
 /** Every stitch name on the planner is written in US terms and shown in the maker's chosen terms. */

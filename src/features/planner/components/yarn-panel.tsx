@@ -1,9 +1,9 @@
 import { Card, CardTitle } from '@/components/ui/card';
 import { Field, Input, Select } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
-import { YARN_WEIGHTS } from '../../../../shared/sizing/yarn-weights';
-import { WORSTED_YARDS_PER_SQ_IN } from '../../../../shared/sizing/yarn-estimate';
-import { yardsToMetres } from '../../../../shared/sizing/units';
+import { YARN_WEIGHTS } from '@shared/sizing/yarn-weights';
+import { WORSTED_YARDS_PER_SQ_IN } from '@shared/sizing/yarn-estimate';
+import { yardsToMetres } from '@shared/sizing/units';
 import type { FieldErrors, PlannerResult, PlannerState } from '../hooks/use-planner';
 import { formatLength } from './terms';
 

@@ -1,15 +1,15 @@
 import { useCallback, useMemo, useState } from 'react';
-import { BORDER_LIBRARY, borderById, borderDepthCm, type BorderPattern } from '../../../../shared/border/library';
-import { planBorder, type BorderPlan } from '../../../../shared/border/plan';
-import { rowCount, type BodyRows, type RowType } from '../../../../shared/border/row-ends';
-import type { FitStrategy } from '../../../../shared/border/fit';
-import type { RoundMode } from '../../../../shared/border/round';
-import { BorderFitRequestSchema, GaugeSchema, SizeFromGaugeRequestSchema, YarnEstimateRequestSchema } from '../../../../shared/schemas/border-fit';
-import type { PlanInput, PlanInputDraft } from '../../../../shared/schemas/plan';
-import { bodyCountsFromGauge, finishedSizeFromCounts, type BodyCounts, type BodyStitch, type Gauge, type Size } from '../../../../shared/sizing/gauge';
-import { estimateYarn, type YarnEstimate } from '../../../../shared/sizing/yarn-estimate';
-import { UK_TO_US, US_TO_UK } from '../../../../shared/sizing/stitch-names';
-import { fromCm, toCm, type LengthUnit, type YarnUnit } from '../../../../shared/sizing/units';
+import { BORDER_LIBRARY, borderById, borderDepthCm, type BorderPattern } from '@shared/border/library';
+import { planBorder, type BorderPlan } from '@shared/border/plan';
+import { rowCount, type BodyRows, type RowType } from '@shared/border/row-ends';
+import type { FitStrategy } from '@shared/border/fit';
+import type { RoundMode } from '@shared/border/round';
+import { BorderFitRequestSchema, GaugeSchema, SizeFromGaugeRequestSchema, YarnEstimateRequestSchema } from '@shared/schemas/border-fit';
+import type { PlanInput, PlanInputDraft } from '@shared/schemas/plan';
+import { bodyCountsFromGauge, finishedSizeFromCounts, type BodyCounts, type BodyStitch, type Gauge, type Size } from '@shared/sizing/gauge';
+import { estimateYarn, type YarnEstimate } from '@shared/sizing/yarn-estimate';
+import { UK_TO_US, US_TO_UK } from '@shared/sizing/stitch-names';
+import { fromCm, toCm, type LengthUnit, type YarnUnit } from '@shared/sizing/units';
 
 export type Terms = 'us' | 'uk';
 export type RowPresetId = 'hdc' | 'sc-dc' | 'dc' | 'sc' | 'plain' | 'custom';

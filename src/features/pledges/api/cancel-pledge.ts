@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { PledgeView } from '../../../../shared/schemas/pledge';
+import type { PledgeView } from '@shared/schemas/pledge';
 import { pledgeKeys } from './keys';
 
 export const cancelPledge = (id: number) => api.delete<{ pledge: PledgeView }>(`/api/pledges/${id}`).then((r) => r.pledge);

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { PledgeCreate, PledgeView } from '../../../../shared/schemas/pledge';
+import type { PledgeCreate, PledgeView } from '@shared/schemas/pledge';
 import { pledgeKeys } from './keys';
 
 export const createPledge = (body: PledgeCreate) => api.post<{ pledge: PledgeView }>('/api/pledges', body).then((r) => r.pledge);

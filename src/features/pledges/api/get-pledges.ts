@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, qs } from '@/lib/api-client';
-import type { PledgeView } from '../../../../shared/schemas/pledge';
+import type { PledgeView } from '@shared/schemas/pledge';
 import { pledgeKeys } from './keys';
 
 /** The signed-in person's own pledges (organisers would otherwise get everyone's). */

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { PledgeUpdate, PledgeView } from '../../../../shared/schemas/pledge';
+import type { PledgeUpdate, PledgeView } from '@shared/schemas/pledge';
 import { pledgeKeys } from './keys';
 
 export const updatePledge = ({ id, ...body }: PledgeUpdate & { id: number }) =>

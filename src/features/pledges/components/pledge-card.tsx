@@ -10,8 +10,8 @@ import { Alert } from '@/components/ui/alert';
 import { ProgressBar } from '@/components/ui/progress-bar';
 import { applyServerErrors } from '@/components/ui/form-errors';
 import { daysUntil, formatDay, isoDayFromToday } from '@/components/ui/format-day';
-import { MAX_PLEDGE_QUANTITY, PledgeCreateSchema, type PledgeView } from '../../../../shared/schemas/pledge';
-import { sizeCategoryRow } from '../../../../shared/guidelines/size-categories';
+import { MAX_PLEDGE_QUANTITY, PledgeCreateSchema, type PledgeView } from '@shared/schemas/pledge';
+import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import { useUpdatePledge } from '../api/update-pledge';
 import { useCancelPledge } from '../api/cancel-pledge';
 

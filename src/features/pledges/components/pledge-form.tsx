@@ -5,10 +5,10 @@ import { Field, Input, Select } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { applyServerErrors } from '@/components/ui/form-errors';
 import { formatDay, isoDayFromToday } from '@/components/ui/format-day';
-import { SIZE_CATEGORIES, type SizeCategory } from '../../../../shared/schemas/blanket';
-import { MAX_PLEDGE_QUANTITY, PledgeCreateSchema, type PledgeCreate, type PledgeView } from '../../../../shared/schemas/pledge';
-import { sizeCategoryRow } from '../../../../shared/guidelines/size-categories';
-import { capitalise } from '../../../../shared/guidelines/wording';
+import { SIZE_CATEGORIES, type SizeCategory } from '@shared/schemas/blanket';
+import { MAX_PLEDGE_QUANTITY, PledgeCreateSchema, type PledgeCreate, type PledgeView } from '@shared/schemas/pledge';
+import { sizeCategoryRow } from '@shared/guidelines/size-categories';
+import { capitalise } from '@shared/guidelines/wording';
 import { useCreatePledge } from '../api/create-pledge';
 
 export interface PledgeTarget {

@@ -1,5 +1,5 @@
-import type { BlanketStatus } from '../../../../shared/schemas/blanket';
-import { STATUS_LABELS } from '../../../../shared/blankets/status';
+import type { BlanketStatus } from '@shared/schemas/blanket';
+import { STATUS_LABELS } from '@shared/blankets/status';
 
 export interface NeedLike {
   quantity: number;

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { RecipientView } from '../../../../shared/schemas/recipient';
+import type { RecipientView } from '@shared/schemas/recipient';
 import { recipientKeys } from './keys';
 
 export type RecipientInput = Omit<RecipientView, 'id' | 'version' | 'guidelines' | 'guidelineSummary' | 'needs'>;

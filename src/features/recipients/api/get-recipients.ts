@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { RecipientView } from '../../../../shared/schemas/recipient';
+import type { RecipientView } from '@shared/schemas/recipient';
 import { recipientKeys } from './keys';
 
 export const getRecipients = (active: 'true' | 'false' | 'all' = 'all') =>

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { GuidelineSet } from '../../../../shared/schemas/guidelines';
-import type { RecipientView } from '../../../../shared/schemas/recipient';
+import type { GuidelineSet } from '@shared/schemas/guidelines';
+import type { RecipientView } from '@shared/schemas/recipient';
 import { recipientKeys } from './keys';
 
 export const putGuidelines = ({ id, guidelines, version }: { id: number; guidelines: GuidelineSet; version?: number }) =>

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { NeedCreate, NeedView } from '../../../../shared/schemas/recipient';
+import type { NeedCreate, NeedView } from '@shared/schemas/recipient';
 import { recipientKeys } from './keys';
 
 export interface SaveNeedInput {

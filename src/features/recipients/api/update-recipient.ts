@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { RecipientView } from '../../../../shared/schemas/recipient';
+import type { RecipientView } from '@shared/schemas/recipient';
 import type { RecipientInput } from './create-recipient';
 import { recipientKeys } from './keys';
 

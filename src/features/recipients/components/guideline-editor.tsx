@@ -3,11 +3,11 @@ import { RotateCcw } from 'lucide-react';
 import { Button } from '@/components/ui/button';
 import { Checkbox, Field, Input, Select } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
-import { defaultGuidelines } from '../../../../shared/guidelines/defaults';
-import { describeGuidelines } from '../../../../shared/guidelines/describe';
-import { featureLabel, fibreLabel, formatIn, yarnWeightName } from '../../../../shared/guidelines/wording';
-import { FEATURES, FIBRES, POPULATION_LABELS, YARN_WEIGHTS, type Feature, type Fibre } from '../../../../shared/schemas/blanket';
-import { GuidelineSetSchema, type GuidelineSet } from '../../../../shared/schemas/guidelines';
+import { defaultGuidelines } from '@shared/guidelines/defaults';
+import { describeGuidelines } from '@shared/guidelines/describe';
+import { featureLabel, fibreLabel, formatIn, yarnWeightName } from '@shared/guidelines/wording';
+import { FEATURES, FIBRES, POPULATION_LABELS, YARN_WEIGHTS, type Feature, type Fibre } from '@shared/schemas/blanket';
+import { GuidelineSetSchema, type GuidelineSet } from '@shared/schemas/guidelines';
 import { fieldErrors, zodErrors } from './field-errors';
 
 interface Props {

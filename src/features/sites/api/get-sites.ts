@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { SiteView } from '../../../../shared/schemas/site';
+import type { SiteView } from '@shared/schemas/site';
 import { siteKeys } from './keys';
 
 export const getSites = (active: 'true' | 'false' | 'all' = 'all') => api.get<{ sites: SiteView[] }>(`/api/sites?active=${active}`).then((r) => r.sites);

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { SiteView } from '../../../../shared/schemas/site';
+import type { SiteView } from '@shared/schemas/site';
 import { siteKeys } from './keys';
 
 export type SiteInput = Omit<SiteView, 'id'>;

@@ -4,7 +4,7 @@ import { Checkbox, Field, Input, Textarea } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { PinMap } from '@/components/ui/pin-map';
 import { ApiError } from '@/lib/api-client';
-import { SiteCreateSchema, type SiteView } from '../../../../shared/schemas/site';
+import { SiteCreateSchema, type SiteView } from '@shared/schemas/site';
 import type { SiteInput } from '../api/save-site';
 
 export const TOWN_CENTRE = { lat: 46.2, lng: -27.4 };
