@@ -1,6 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
-import { OptimisticLockError, UniqueConstraintError, ForeignKeyConstraintError, ValidationError } from 'sequelize';
+import { OptimisticLockError, UniqueConstraintError, ForeignKeyConstraintError, ValidationError, TimeoutError } from 'sequelize';
 import { HttpError } from '../lib/http-error';
 
 interface Issue {
@@ -35,6 +35,12 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, next) => {
   if (err instanceof ForeignKeyConstraintError) return send(res, 409, 'This refers to a record that does not exist');
   if (err instanceof ValidationError) {
     return send(res, 400, err.errors[0]?.message ?? 'Invalid value', err.errors.map((e) => ({ path: e.path ?? '', message: e.message })));
+  }
+  // Writes queue in-process (server/db/sequelize.ts); a lock still held past every retry means another
+  // process (a backup, a script) holds the database. Say so and ask for a retry rather than a bare 500.
+  if (err instanceof TimeoutError) {
+    res.setHeader('Retry-After', '2');
+    return send(res, 503, 'Kindloop is busy saving other changes; please try again in a moment');
   }
   // body-parser and multer errors carry a status or a code of their own.
   const e = err as { type?: string; status?: number; code?: string; message?: string; field?: string };

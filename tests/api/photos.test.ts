@@ -234,12 +234,12 @@ describe('POST /api/blankets/:id/photos', () => {
       { data: one, name: '4.jpg' },
       { data: one, name: '5.jpg' },
     ]);
-    expect(two.status).toBe(400);
+    expect(two.status).toBe(409);
     expect(two.body.error.message).toMatch(/at most 1 more/);
     expect(filesIn(t.config.uploadDir)).toEqual(before);
     expect((await upload(vol, b.id, [{ data: one, name: '4.jpg' }])).status).toBe(201);
     const fifth = await upload(vol, b.id, [{ data: one, name: '5.jpg' }]);
-    expect(fifth.status).toBe(400);
+    expect(fifth.status).toBe(409);
     expect(fifth.body.error.message).toMatch(/remove one first/);
     expect(await Photo.count({ where: { blanketId: b.id } })).toBe(4);
   });

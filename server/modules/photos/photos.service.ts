@@ -12,11 +12,15 @@ const eventData = (v: unknown) => v as BlanketEvent['data'];
 
 const photoError = (status: number, message: string) => new HttpError(status, `photos: ${message}`, [{ path: 'photos', message }]);
 
+/**
+ * More files in one request than any blanket takes is the request's own fault (400); a blanket that
+ * has no room left for them is a conflict with what is already there, often an upload that won (409).
+ */
 function roomLeft(existing: number, adding: number) {
   if (existing + adding > MAX_PHOTOS_PER_BLANKET) {
     const left = MAX_PHOTOS_PER_BLANKET - existing;
     throw photoError(
-      400,
+      adding > MAX_PHOTOS_PER_BLANKET ? 400 : 409,
       `a blanket has at most ${MAX_PHOTOS_PER_BLANKET} photos; this one has ${existing}, so ${left === 0 ? 'remove one first' : `add at most ${left} more`}`,
     );
   }
