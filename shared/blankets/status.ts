@@ -27,11 +27,20 @@ export interface StatusMove {
   /** The button text for this move, in the mover's words. */
   action: string;
   /**
+   * The door the move comes through. Without one it is a bare status change on the blanket page;
    * 'intake': made only through the intake and inspection steps, which record the re-measure,
-   * the checklist and the guideline check that justify it, never by a bare status change.
+   * the checklist and the guideline check that justify it. Other steps (assigning, booking, packing,
+   * delivering) claim their moves the same way once they record something of their own with them.
    */
-  via?: 'intake';
+  via?: Exclude<MoveChannel, 'plain'>;
 }
+
+/** The doors a blanket's status can be moved through; see `StatusMove.via`. */
+export const MOVE_CHANNELS = ['plain', 'intake', 'assignment', 'booking', 'packing', 'delivery'] as const;
+export type MoveChannel = (typeof MOVE_CHANNELS)[number];
+
+/** The door a move belongs to. */
+export const moveChannel = (move: StatusMove): MoveChannel => move.via ?? 'plain';
 
 const STAFF: readonly Mover[] = ['organiser', 'coordinator'];
 const MAKER: readonly Mover[] = ['maker'];

@@ -20,7 +20,8 @@ import {
   type BlanketUpdate,
   type PhotoView,
 } from '@shared/schemas/blanket-log';
-import { checkTransition, isIntakeMove, isMakerEditable, movesFrom, type TransitionRefusal } from '@shared/blankets/status';
+import { isIntakeMove, isMakerEditable, moveChannel, movesFrom } from '@shared/blankets/status';
+import { moveBlanket } from './move-blanket';
 import { check, evaluate, type OtherRecipient } from '@shared/guidelines/check';
 import { activeRecipients, guidelinesOf, recipientBrief } from '../pledges/recipient-brief';
 import { readsAll, refreshPledgeStatus, type Actor } from '../pledges/pledges.service';
@@ -165,7 +166,7 @@ export async function blanketDetail(actor: Actor, id: number, transaction?: Tran
     cautions: brief?.cautions ?? [],
     // Receiving and inspecting happen on the intake page, where the check is recorded with them.
     moves: movesFrom(b.status, { role: actor.role, isMaker })
-      .filter((m) => !isIntakeMove(m))
+      .filter((m) => moveChannel(m) === 'plain')
       .map((m) => ({ to: m.to, direction: m.direction, action: m.action })),
     atIntake: movesFrom(b.status, { role: actor.role, isMaker }).some(isIntakeMove),
     editable: isMaker && isMakerEditable(b.status),
@@ -209,39 +210,6 @@ export async function createBlanket(actor: Actor, body: BlanketCreate, transacti
   );
   await refreshPledgeStatus(pledge.id, transaction);
   return b.id;
-}
-
-const REFUSAL_STATUS: Record<TransitionRefusal, number> = { same: 409, skip: 409, role: 403, reason: 400 };
-
-/**
- * Moves a blanket along its life, as the machine in shared/blankets/status.ts allows, and records
- * who did it, when and why. Other areas (intake, packing, delivery) move blankets through here.
- */
-export async function moveBlanketStatus(
-  b: Blanket,
-  to: BlanketStatus,
-  actor: Actor,
-  reason: string | null | undefined,
-  transaction: Transaction,
-  data: unknown = null,
-): Promise<void> {
-  const verdict = checkTransition(b.status, to, { role: actor.role, isMaker: b.userId === actor.id }, reason);
-  if (!verdict.ok) {
-    const path = verdict.refusal === 'reason' ? 'reason' : 'status';
-    throw fieldError(REFUSAL_STATUS[verdict.refusal], path, `${path}: ${verdict.message}`);
-  }
-  if (isIntakeMove(verdict.move)) {
-    throw fieldError(409, 'status', 'status: receive and inspect blankets on the intake page, where the measurements, checklist and check are recorded with the move');
-  }
-  const from = b.status;
-  b.status = to;
-  if (to === 'received') b.receivedAt = new Date();
-  await b.save({ transaction });
-  await BlanketEvent.create(
-    { blanketId: b.id, actorId: actor.id, kind: 'status', fromStatus: from, toStatus: to, reason: verdict.reason, data: eventData(data) },
-    { transaction },
-  );
-  await refreshPledgeStatus(b.pledgeId, transaction);
 }
 
 export async function updateBlanket(actor: Actor, id: number, body: BlanketUpdate, transaction: Transaction): Promise<void> {
@@ -291,6 +259,6 @@ export async function updateBlanket(actor: Actor, id: number, body: BlanketUpdat
     await b.save({ transaction });
   }
   if (body.status !== undefined) {
-    await moveBlanketStatus(b, body.status, actor, body.reason, transaction, wantsSite ? { siteId: b.siteId ?? null } : null);
+    await moveBlanket({ blanket: b, to: body.status, actor, reason: body.reason, data: wantsSite ? { siteId: b.siteId ?? null } : null }, transaction);
   }
 }

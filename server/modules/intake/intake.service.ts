@@ -2,13 +2,12 @@ import { Op, type Sequelize, type Transaction } from 'sequelize';
 import QRCode from 'qrcode';
 import { Blanket } from '../../db/models/blanket';
 import { BlanketEvent } from '../../db/models/blanket-event';
+import { moveBlanket } from '../blankets/move-blanket';
 import { Recipient } from '../../db/models/recipient';
 import { Site } from '../../db/models/site';
 import { User } from '../../db/models/user';
 import { HttpError, notFound } from '../../lib/http-error';
-import { enqueueMail } from '../../mail/outbox';
 import { blanketNeedsFixMail } from '../../mail/templates';
-import { checkTransition } from '@shared/blankets/status';
 import { sizeCategoryFor } from '@shared/guidelines/size-categories';
 import { pickBlanketFields, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
 import {
@@ -98,15 +97,6 @@ function checkVersion(b: Blanket, sent: number | undefined) {
   }
 }
 
-/**
- * The one gate for the status moves intake makes: the status machine's own rules (a walk-in
- * drop-off, finished → received, is one of its moves).
- */
-function assertMove(from: BlanketStatus, to: BlanketStatus, actor: Actor, isMaker: boolean, reason?: string | null) {
-  const verdict = checkTransition(from, to, { role: actor.role, isMaker }, reason);
-  if (!verdict.ok) throw new HttpError(verdict.refusal === 'role' ? 403 : 409, verdict.message);
-}
-
 export interface BlanketWithCheck {
   blanket: IntakeBlanketView;
   /** The guideline check against where it is meant to go, when it has a recipient. */
@@ -147,23 +137,15 @@ export async function receive(sequelize: Sequelize, id: number, input: IntakeBod
         { path: 'siteId', message: `${site.name} is not taking blankets` },
       ]);
     }
-    const from = b.status;
-    assertMove(from, 'received', actor, b.userId === actor.id);
     const logged = { widthCm: b.widthCm, lengthCm: b.lengthCm };
-    b.status = 'received';
-    b.siteId = site.id;
-    b.receivedAt = new Date();
-    b.widthCm = input.widthCm;
-    b.lengthCm = input.lengthCm;
-    await b.save({ transaction });
-    await BlanketEvent.create(
+    await moveBlanket(
       {
-        blanketId: b.id,
-        actorId: actor.id,
+        blanket: b,
+        to: 'received',
+        actor,
+        via: 'intake',
         kind: 'intake',
-        fromStatus: from,
-        toStatus: 'received',
-        reason: null,
+        changes: { siteId: site.id, receivedAt: new Date(), widthCm: input.widthCm, lengthCm: input.lengthCm },
         data: {
           siteId: site.id,
           siteName: site.name,
@@ -172,7 +154,7 @@ export async function receive(sequelize: Sequelize, id: number, input: IntakeBod
           note: input.note ?? null,
         },
       },
-      { transaction },
+      transaction,
     );
   });
   return findById(id);
@@ -256,23 +238,36 @@ export async function inspect(
     }
 
     const toStatus: BlanketStatus = input.outcome === 'redirect' ? 'checked' : input.outcome;
-    assertMove(b.status, toStatus, actor, b.userId === actor.id);
-    const from = b.status;
     const correctedFields: Partial<Record<keyof BlanketFields, { from: unknown; to: unknown }>> = {};
     for (const [key, value] of Object.entries(input.corrections ?? {}) as Array<[keyof BlanketFields, unknown]>) {
       correctedFields[key] = { from: before[key], to: value };
     }
-    b.set({ ...(input.corrections ?? {}), status: toStatus, recipientId: finalRecipientId });
-    await b.save({ transaction });
-
-    await BlanketEvent.create(
+    const mail =
+      input.outcome === 'needs_fix' && b.maker
+        ? [
+            {
+              to: b.maker.email,
+              ...blanketNeedsFixMail({
+                name: b.maker.name.split(/\s+/)[0] ?? b.maker.name,
+                code: b.code,
+                recipientName: check.recipient.name,
+                fixes,
+                note: input.fixNote,
+                appUrl: `${appUrl}/my/blankets`,
+              }),
+            },
+          ]
+        : [];
+    await moveBlanket(
       {
-        blanketId: b.id,
-        actorId: actor.id,
+        blanket: b,
+        to: toStatus,
+        actor,
+        via: 'intake',
         kind: 'inspection',
-        fromStatus: from,
-        toStatus,
+        // An override's reason is the move's reason; the machine itself asks none of a forward move.
         reason: input.overrideReason ?? null,
+        changes: { ...(input.corrections ?? {}), recipientId: finalRecipientId },
         data: {
           checklist: input.checklist,
           corrections: correctedFields,
@@ -294,21 +289,10 @@ export async function inspect(
           fixNote: input.fixNote ?? null,
           note: input.note ?? null,
         },
+        mail,
       },
-      { transaction },
+      transaction,
     );
-
-    if (input.outcome === 'needs_fix' && b.maker) {
-      const mail = blanketNeedsFixMail({
-        name: b.maker.name.split(/\s+/)[0] ?? b.maker.name,
-        code: b.code,
-        recipientName: check.recipient.name,
-        fixes,
-        note: input.fixNote,
-        appUrl: `${appUrl}/my/blankets`,
-      });
-      await enqueueMail({ to: b.maker.email, ...mail }, transaction);
-    }
   });
   return findById(id);
 }
