@@ -135,3 +135,23 @@ export function pickBlanketFields<T extends Record<keyof BlanketFields, unknown>
     newYarn: b.newYarn,
   };
 }
+
+/** The size a blanket is held to: measured at intake where it has been, else as its maker logged it. */
+export function sizeOnRecord(b: { widthCm: number; lengthCm: number; measuredWidthCm?: number | null; measuredLengthCm?: number | null }): {
+  widthCm: number;
+  lengthCm: number;
+  measured: boolean;
+} {
+  const measured = b.measuredWidthCm != null && b.measuredLengthCm != null;
+  return measured
+    ? { widthCm: b.measuredWidthCm!, lengthCm: b.measuredLengthCm!, measured }
+    : { widthCm: b.widthCm, lengthCm: b.lengthCm, measured };
+}
+
+/** The fields a guideline check reads, with the size on record (measured where it was). */
+export function fieldsForCheck<T extends Record<keyof BlanketFields, unknown> & { measuredWidthCm?: number | null; measuredLengthCm?: number | null }>(
+  b: T,
+): Pick<T, keyof BlanketFields> {
+  const size = sizeOnRecord(b as unknown as Parameters<typeof sizeOnRecord>[0]);
+  return { ...pickBlanketFields(b), widthCm: size.widthCm, lengthCm: size.lengthCm } as Pick<T, keyof BlanketFields>;
+}

@@ -273,8 +273,13 @@ export interface IntakeBlanketView {
   code: string;
   status: BlanketStatus;
   version: number;
+  /** The size on record: measured at intake where it was, else as logged. */
   widthCm: number;
   lengthCm: number;
+  /** Whether widthCm/lengthCm are the intake measurement. */
+  measured: boolean;
+  /** The size as its maker logged it, kept beside the measurement. */
+  logged: { widthCm: number; lengthCm: number };
   yarnWeight: number;
   fibres: string[];
   features: string[];

@@ -96,7 +96,11 @@ describe('receiving a blanket', () => {
     const b = await blanket();
     const res = await organiser.post(`/api/blankets/${b.id}/intake`, { siteId: library.id, widthCm: 78.5, lengthCm: 101, note: 'Slightly damp bag', version: b.version });
     expect(res.status).toBe(200);
-    expect(res.body.blanket).toMatchObject({ status: 'received', widthCm: 78.5, lengthCm: 101, site: { id: library.id } });
+    expect(res.body.blanket).toMatchObject({ status: 'received', widthCm: 78.5, lengthCm: 101, measured: true, site: { id: library.id } });
+    // The maker's own figures stay on record beside the measurement.
+    expect(res.body.blanket.logged).toEqual({ widthCm: 80, lengthCm: 100 });
+    const row = (await Blanket.findByPk(b.id))!;
+    expect([row.widthCm, row.lengthCm, row.measuredWidthCm, row.measuredLengthCm]).toEqual([80, 100, 78.5, 101]);
     expect(res.body.blanket.receivedAt).not.toBeNull();
     const event = res.body.blanket.history.at(-1);
     expect(event).toMatchObject({ kind: 'intake', fromStatus: 'finished', toStatus: 'received', actor: { name: 'Odile Farrant' } });

@@ -16,6 +16,9 @@ export class Blanket extends Model<InferAttributes<Blanket>, InferCreationAttrib
   declare status: CreationOptional<BlanketStatus>;
   declare widthCm: number;
   declare lengthCm: number;
+  /** Re-measured at intake; null until then. The logged widthCm/lengthCm stay as the maker gave them. */
+  declare measuredWidthCm: CreationOptional<number | null>;
+  declare measuredLengthCm: CreationOptional<number | null>;
   declare yarnWeight: number;
   declare fibres: Fibre[];
   declare colours: CreationOptional<string>;
@@ -45,6 +48,8 @@ export function initBlanket(sequelize: Sequelize) {
       status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'in_progress' },
       widthCm: { type: DataTypes.DOUBLE, allowNull: false },
       lengthCm: { type: DataTypes.DOUBLE, allowNull: false },
+      measuredWidthCm: { type: DataTypes.DOUBLE, allowNull: true },
+      measuredLengthCm: { type: DataTypes.DOUBLE, allowNull: true },
       yarnWeight: { type: DataTypes.INTEGER, allowNull: false },
       fibres: { type: DataTypes.JSON, allowNull: false },
       colours: { type: DataTypes.STRING(200), allowNull: false, defaultValue: '' },

@@ -9,7 +9,7 @@ import { User } from '../../db/models/user';
 import { HttpError, notFound } from '../../lib/http-error';
 import { blanketNeedsFixMail } from '../../mail/templates';
 import { sizeCategoryFor } from '@shared/guidelines/size-categories';
-import { pickBlanketFields, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
+import { fieldsForCheck, sizeOnRecord, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
 import {
   CHECKLIST_ITEMS,
   RECEIVABLE_STATUSES,
@@ -61,8 +61,8 @@ async function view(b: LoadedBlanket, transaction?: Transaction): Promise<Intake
     code: b.code,
     status: b.status,
     version: b.version,
-    widthCm: b.widthCm,
-    lengthCm: b.lengthCm,
+    ...sizeOnRecord(b),
+    logged: { widthCm: b.widthCm, lengthCm: b.lengthCm },
     yarnWeight: b.yarnWeight,
     fibres: b.fibres,
     features: b.features ?? [],
@@ -74,7 +74,7 @@ async function view(b: LoadedBlanket, transaction?: Transaction): Promise<Intake
     petFree: b.petFree,
     newYarn: b.newYarn,
     notes: b.notes,
-    sizeCategory: sizeCategoryFor(b.widthCm, b.lengthCm),
+    sizeCategory: sizeCategoryFor(sizeOnRecord(b).widthCm, sizeOnRecord(b).lengthCm),
     receivedAt: b.receivedAt ? b.receivedAt.toISOString() : null,
     maker: { id: b.maker?.id ?? b.userId, name: b.maker?.name ?? '', label: makerLabel(b, b.maker) },
     recipient: b.recipient ? { id: b.recipient.id, name: b.recipient.name, population: b.recipient.population } : null,
@@ -97,6 +97,16 @@ function checkVersion(b: Blanket, sent: number | undefined) {
   }
 }
 
+/** A size corrected at the table is a measurement: it goes beside the logged size, never over it. */
+function correctionsOnRecord(corrections: Partial<BlanketFields> | undefined): Record<string, unknown> {
+  const { widthCm, lengthCm, ...rest } = corrections ?? {};
+  return {
+    ...rest,
+    ...(widthCm !== undefined ? { measuredWidthCm: widthCm } : {}),
+    ...(lengthCm !== undefined ? { measuredLengthCm: lengthCm } : {}),
+  };
+}
+
 export interface BlanketWithCheck {
   blanket: IntakeBlanketView;
   /** The guideline check against where it is meant to go, when it has a recipient. */
@@ -104,7 +114,7 @@ export interface BlanketWithCheck {
 }
 
 async function withCheck(b: LoadedBlanket): Promise<BlanketWithCheck> {
-  const check = b.recipientId ? await checkAgainst(b.recipientId, pickBlanketFields(b)) : null;
+  const check = b.recipientId ? await checkAgainst(b.recipientId, fieldsForCheck(b)) : null;
   return { blanket: await view(b), check };
 }
 
@@ -145,7 +155,7 @@ export async function receive(sequelize: Sequelize, id: number, input: IntakeBod
         actor,
         via: 'intake',
         kind: 'intake',
-        changes: { siteId: site.id, receivedAt: new Date(), widthCm: input.widthCm, lengthCm: input.lengthCm },
+        changes: { siteId: site.id, receivedAt: new Date(), measuredWidthCm: input.widthCm, measuredLengthCm: input.lengthCm },
         data: {
           siteId: site.id,
           siteName: site.name,
@@ -185,7 +195,7 @@ export async function inspect(
       ]);
     }
 
-    const before = pickBlanketFields(b);
+    const before = fieldsForCheck(b);
     const corrected: BlanketFields = { ...before, ...(input.corrections ?? {}) };
     const check = await checkAgainst(targetId, corrected, transaction).catch((e: unknown) => {
       if (e instanceof HttpError && e.status === 404) {
@@ -267,7 +277,7 @@ export async function inspect(
         kind: 'inspection',
         // An override's reason is the move's reason; the machine itself asks none of a forward move.
         reason: input.overrideReason ?? null,
-        changes: { ...(input.corrections ?? {}), recipientId: finalRecipientId },
+        changes: { ...correctionsOnRecord(input.corrections), recipientId: finalRecipientId },
         data: {
           checklist: input.checklist,
           corrections: correctedFields,
@@ -310,9 +320,9 @@ function queueItem(b: LoadedBlanket, at: Date | null): IntakeQueueItem {
     status: b.status,
     makerLabel: makerLabel(b, b.maker),
     recipientName: b.recipient?.name ?? null,
-    widthCm: b.widthCm,
-    lengthCm: b.lengthCm,
-    sizeCategory: sizeCategoryFor(b.widthCm, b.lengthCm),
+    widthCm: sizeOnRecord(b).widthCm,
+    lengthCm: sizeOnRecord(b).lengthCm,
+    sizeCategory: sizeCategoryFor(sizeOnRecord(b).widthCm, sizeOnRecord(b).lengthCm),
     at: at ? at.toISOString() : null,
   };
 }
@@ -387,9 +397,9 @@ export async function tags(ids: number[], actor: Actor, appUrl: string): Promise
         id: b.id,
         code: b.code,
         makerLabel: makerLabel(b, b.maker),
-        widthCm: b.widthCm,
-        lengthCm: b.lengthCm,
-        sizeCategory: sizeCategoryFor(b.widthCm, b.lengthCm),
+        widthCm: sizeOnRecord(b).widthCm,
+        lengthCm: sizeOnRecord(b).lengthCm,
+        sizeCategory: sizeCategoryFor(sizeOnRecord(b).widthCm, sizeOnRecord(b).lengthCm),
         recipientName: b.recipient?.name ?? null,
         recipientPopulation: b.recipient?.population ?? null,
         link,
