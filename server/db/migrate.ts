@@ -2,6 +2,7 @@ import { Umzug, SequelizeStorage } from 'umzug';
 import type { Sequelize } from 'sequelize';
 import * as m0001 from './migrations/0001-foundation';
 import * as m0002 from './migrations/0002-drive-data';
+import * as m0010 from './migrations/0010-read-indexes';
 
 /**
  * Migrations are listed here in order rather than globbed, so the same list works under tsx, in
@@ -10,6 +11,7 @@ import * as m0002 from './migrations/0002-drive-data';
 const migrations = [
   { name: '0001-foundation', ...m0001 },
   { name: '0002-drive-data', ...m0002 },
+  { name: '0010-read-indexes', ...m0010 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

@@ -1,6 +1,7 @@
 import { Sequelize } from 'sequelize';
 import fs from 'node:fs';
 import path from 'node:path';
+import { cachingSqlite3 } from './sqlite-column-cache';
 
 /** Opens the SQLite file with WAL and foreign keys on (SQLite leaves foreign keys off by default). */
 export async function openDatabase(databasePath: string): Promise<Sequelize> {
@@ -8,6 +9,8 @@ export async function openDatabase(databasePath: string): Promise<Sequelize> {
   const sequelize = new Sequelize({
     dialect: 'sqlite',
     storage: databasePath,
+    // Remembers each table's columns instead of asking SQLite again before every SELECT.
+    dialectModule: cachingSqlite3,
     logging: false,
     // One connection: SQLite serialises writers anyway, and a single handle keeps PRAGMAs in force.
     pool: { max: 1, min: 1, idle: 60_000 },

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { SizeCategorySchema, type Population } from './blanket';
+import { SizeCategorySchema, type BlanketStatus, type Population } from './blanket';
 import type { GuidelineSet } from './guidelines';
 import { IsoDaySchema } from './recipient';
 
@@ -102,6 +102,31 @@ export interface RecipientBrief {
   guidelines: GuidelineSet;
   guidelineSummary: string[];
   cautions: Caution[];
+}
+
+/**
+ * The figures every page and chart shows for one need, all from one aggregate query
+ * (server/modules/pledges/need-counts.ts), so that no two pages can disagree.
+ */
+export interface NeedCounts {
+  needId: number;
+  recipientId: number;
+  /** Blankets the recipient asked for. */
+  wanted: number;
+  /** Promised in active or fulfilled pledges: a fulfilled pledge's blankets are made, so no longer wanted. */
+  pledged: number;
+  /** Blankets under those pledges that are made and not declined (see FINISHED_STATUSES). */
+  finished: number;
+  /** Of those, the ones with the organisers now (WITH_ORGANISERS). */
+  inHand: number;
+  /** Of those, the ones given to a recipient (ASSIGNED_STATUSES). */
+  assigned: number;
+}
+
+/** The drive's progress for the staff home page: per recipient, and blankets per status. */
+export interface DriveProgress {
+  recipients: Array<{ recipientId: number; name: string; wanted: number; pledged: number; finished: number; inHand: number; assigned: number }>;
+  statuses: Array<{ status: BlanketStatus; count: number }>;
 }
 
 /** An open need as a volunteer sees it in "What's needed". */

@@ -168,8 +168,14 @@ export interface NeedView {
   quantity: number;
   deadline: string;
   preferences: string | null;
-  /** Blankets promised against this need by active pledges. */
+  /** Blankets promised against this need by active or fulfilled pledges (see NeedCounts). */
   pledged: number;
+  /** Made and not declined, under pledges for this need. */
+  finished: number;
+  /** With the organisers: received, checked or held for a fix. */
+  inHand: number;
+  /** Assigned, packed or delivered. */
+  assigned: number;
   version: number;
 }
 
