@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { SizeCategorySchema, type BlanketStatus, type Population } from './blanket';
 import type { GuidelineSet } from './guidelines';
 import { IsoDaySchema } from './recipient';
+import { PageQuerySchema, SearchSchema } from './page';
 
 /** Most blankets one person promises in one pledge; past this it is a typing slip, not a plan. */
 export const MAX_PLEDGE_QUANTITY = 50;
@@ -52,10 +53,16 @@ export type PledgeUpdate = z.infer<typeof PledgeUpdateSchema>;
 const flag = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
 
 /** GET /api/pledges. Organisers and coordinators see everyone's unless they ask for `mine`. */
-export const PledgeListQuerySchema = z.object({
+export const PLEDGE_SORTS = ['dueDate', 'createdAt', 'quantity', 'status', 'maker'] as const;
+export type PledgeSort = (typeof PLEDGE_SORTS)[number];
+
+/** One page, soonest due first unless `sort`/`dir` say otherwise; `q` searches the maker's name. */
+export const PledgeListQuerySchema = PageQuerySchema.extend({
   mine: flag.optional(),
   status: PledgeStatusSchema.optional(),
   needId: z.coerce.number().int().positive().optional(),
+  sort: z.enum(PLEDGE_SORTS, { error: `sort is one of ${PLEDGE_SORTS.join(', ')}` }).default('dueDate'),
+  q: SearchSchema,
 });
 export type PledgeListQuery = z.infer<typeof PledgeListQuerySchema>;
 
