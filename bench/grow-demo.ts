@@ -163,9 +163,11 @@ export async function growDemo(opts: { db: string; blankets: number; makers: num
           const g = need ? guidelinesOf(need.recipient) : null;
           const yarnWeight = g?.yarnWeights.includes(3) ? 3 : g?.yarnWeights.includes(4) ? 4 : (g?.yarnWeights[0] ?? 4);
           const blanketRows = statuses.map((status) => {
-            const loggedAt = new Date(today.getTime() - (1 + Math.floor(random() * 40)) * DAY - Math.floor(random() * DAY));
             const steps = pathTo(status);
-            const at = (i: number) => new Date(Math.min(today.getTime() - 60_000, loggedAt.getTime() + i * 1.5 * DAY));
+            // Logged early enough that every step, a day and a half apart, lies in the past: the
+            // drive's history spreads over six weeks rather than piling up on today.
+            const loggedAt = new Date(today.getTime() - (steps.length * 1.5 + 1 + random() * 30) * DAY);
+            const at = (i: number) => new Date(loggedAt.getTime() + i * 1.5 * DAY);
             const received = steps.indexOf('received');
             const fields: BlanketFields = {
               widthCm: Math.round(row.nominalCm.width) - 1 + Math.floor(random() * 3),

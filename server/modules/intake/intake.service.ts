@@ -1,4 +1,4 @@
-import { Op, type Sequelize, type Transaction } from 'sequelize';
+import { Op, literal, where as sqlWhere, type Sequelize, type Transaction } from 'sequelize';
 import QRCode from 'qrcode';
 import { Blanket } from '../../db/models/blanket';
 import { BlanketEvent } from '../../db/models/blanket-event';
@@ -352,14 +352,18 @@ export async function queue(q: IntakeQueueQuery): Promise<IntakeQueue> {
   const [start, end] = dayBounds(isoDay);
   const inDay = { [Op.gte]: start, [Op.lt]: end };
 
-  const events = await BlanketEvent.findAll({
-    attributes: ['id', 'blanketId', 'kind', 'data', 'createdAt'],
-    where: { kind: { [Op.in]: ['intake', 'inspection'] }, createdAt: inDay },
+  // SQLite reads the site out of the intake record itself, so the day's records are never parsed here;
+  // inspections carry large records (the check) and only their time and blanket are needed.
+  const intakeEvents = await BlanketEvent.findAll({
+    attributes: ['id', 'blanketId', 'createdAt'],
+    where: { kind: 'intake', createdAt: inDay, [Op.and]: [sqlWhere(literal("json_extract(`BlanketEvent`.`data`, '$.siteId')"), siteId)] },
     order: [['createdAt', 'ASC'], ['id', 'ASC']],
   });
-  const atSite = (e: BlanketEvent) => (e.data as { siteId?: number } | null)?.siteId === siteId;
-  const intakeEvents = events.filter((e) => e.kind === 'intake' && atSite(e));
-  const inspectionEvents = events.filter((e) => e.kind === 'inspection');
+  const inspectionEvents = await BlanketEvent.findAll({
+    attributes: ['id', 'blanketId', 'createdAt'],
+    where: { kind: 'inspection', createdAt: inDay },
+    order: [['createdAt', 'ASC'], ['id', 'ASC']],
+  });
   const dayIds = [...new Set([...intakeEvents, ...inspectionEvents].map((e) => e.blanketId))];
   const ofDay = dayIds.length
     ? ((await Blanket.findAll({ where: { id: { [Op.in]: dayIds } }, include: QUEUE_INCLUDE })) as LoadedBlanket[])

@@ -1,5 +1,7 @@
-import { QueryTypes, type Transaction } from 'sequelize';
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { Need } from '../../db/models/need';
+import { Pledge } from '../../db/models/pledge';
+import { Blanket } from '../../db/models/blanket';
 import { ASSIGNED_STATUSES, FINISHED_STATUSES, WITH_ORGANISERS } from '@shared/blankets/status';
 import type { NeedCounts } from '@shared/schemas/pledge';
 
@@ -18,9 +20,72 @@ export async function needCounts(
   needIds: readonly number[],
   opts: { blankets?: boolean; transaction?: Transaction } = {},
 ): Promise<Map<number, NeedCounts>> {
-  const out = new Map<number, NeedCounts>();
-  if (needIds.length === 0) return out;
+  if (needIds.length === 0) return new Map();
   const withBlankets = opts.blankets !== false;
+  // Inside a transaction the caller may be looking at its own uncommitted writes: no cache.
+  if (opts.transaction) return countNeeds(needIds, withBlankets, opts.transaction);
+  const sequelize = Need.sequelize!;
+  watchWrites(sequelize);
+  const memo = memoFor(sequelize);
+  const key = `${withBlankets ? 'b' : 'p'}:${[...needIds].sort((a, b) => a - b).join(',')}`;
+  const hit = memo.entries.get(key);
+  if (hit && hit.generation === memo.generation && Date.now() - hit.at < MEMO_MS) return hit.counts;
+  const generation = memo.generation;
+  const counts = await countNeeds(needIds, withBlankets);
+  // A write that committed while we counted makes this answer stale: hand it out, don't keep it.
+  if (memo.generation === generation) {
+    if (memo.entries.size >= 200) memo.entries.clear();
+    memo.entries.set(key, { generation, at: Date.now(), counts });
+  }
+  return counts;
+}
+
+/**
+ * Counts are asked for on every view of "What's needed" and the recipient pages, and change only
+ * when a pledge, a blanket or a need is written. So answers are kept per database until any such
+ * write (the models' hooks, and again when the writing transaction commits), and for at most a few
+ * seconds in case something writes past the models.
+ */
+const MEMO_MS = 5_000;
+interface Memo {
+  generation: number;
+  entries: Map<string, { generation: number; at: number; counts: Map<number, NeedCounts> }>;
+}
+const memos = new WeakMap<Sequelize, Memo>();
+const watched = new WeakMap<Sequelize, Set<unknown>>();
+
+function memoFor(sequelize: Sequelize): Memo {
+  let m = memos.get(sequelize);
+  if (!m) memos.set(sequelize, (m = { generation: 0, entries: new Map() }));
+  return m;
+}
+
+const WRITE_HOOKS = ['afterCreate', 'afterUpdate', 'afterDestroy', 'afterSave', 'afterUpsert', 'afterBulkCreate', 'afterBulkUpdate', 'afterBulkDestroy'] as const;
+
+function watchWrites(sequelize: Sequelize) {
+  const seen = watched.get(sequelize) ?? new Set<unknown>();
+  watched.set(sequelize, seen);
+  for (const model of [Need, Pledge, Blanket]) {
+    // Models are initialised again for each database a test opens; watch each initialisation once.
+    const id = model.options;
+    if (seen.has(id)) continue;
+    seen.add(id);
+    const forget = (...args: unknown[]) => {
+      const memo = memoFor(sequelize);
+      memo.generation += 1;
+      memo.entries.clear();
+      const options = args.find((a): a is { transaction?: Transaction | null } => typeof a === 'object' && a !== null && 'transaction' in a);
+      options?.transaction?.afterCommit(() => {
+        memo.generation += 1;
+        memo.entries.clear();
+      });
+    };
+    for (const hook of WRITE_HOOKS) (model as unknown as { addHook: (h: string, fn: (...a: unknown[]) => void) => void }).addHook(hook, forget);
+  }
+}
+
+async function countNeeds(needIds: readonly number[], withBlankets: boolean, transaction?: Transaction): Promise<Map<number, NeedCounts>> {
+  const out = new Map<number, NeedCounts>();
   // The status lists are constants of the code, never input, so they are written into the SQL.
   const blanketColumns = withBlankets
     ? `, COALESCE(b.finished, 0) AS finished, COALESCE(b.inHand, 0) AS inHand, COALESCE(b.assigned, 0) AS assigned`
@@ -55,7 +120,7 @@ export async function needCounts(
      ) pl ON pl.needId = n.id
      ${blanketJoin}
      WHERE n.id IN (:needIds)`,
-    { replacements: { needIds: [...needIds] }, type: QueryTypes.SELECT, transaction: opts.transaction },
+    { replacements: { needIds: [...needIds] }, type: QueryTypes.SELECT, transaction },
   );
   for (const r of rows) {
     out.set(r.needId, {

@@ -31,9 +31,10 @@ export function storedGuidelines(r: Pick<Recipient, 'guidelines' | 'population'>
 
 type CountsByNeed = Map<number, NeedCounts>;
 
-function needView(n: Need, counts: CountsByNeed): NeedView {
+/** Volunteers see what is pledged; where the blankets stand is for the people who handle them. */
+function needView(n: Need, counts: CountsByNeed, withBlankets: boolean): NeedView {
   const c = counts.get(n.id) ?? noCounts(n.id, n.recipientId, n.quantity);
-  return {
+  const view: NeedView = {
     id: n.id,
     recipientId: n.recipientId,
     sizeCategory: n.sizeCategory,
@@ -41,11 +42,10 @@ function needView(n: Need, counts: CountsByNeed): NeedView {
     deadline: n.deadline,
     preferences: n.preferences ?? null,
     pledged: c.pledged,
-    finished: c.finished,
-    inHand: c.inHand,
-    assigned: c.assigned,
     version: n.version,
   };
+  if (withBlankets) Object.assign(view, { finished: c.finished, inHand: c.inHand, assigned: c.assigned });
+  return view;
 }
 
 function recipientView(r: Recipient, role: Role, counts: CountsByNeed): RecipientView {
@@ -63,7 +63,7 @@ function recipientView(r: Recipient, role: Role, counts: CountsByNeed): Recipien
     version: r.version,
     guidelines,
     guidelineSummary: describeGuidelines(guidelines),
-    needs: needs.map((n) => needView(n, counts)),
+    needs: needs.map((n) => needView(n, counts, seesContacts(role))),
   };
   if (seesContacts(role)) {
     view.contactName = r.contactName ?? null;
@@ -79,7 +79,7 @@ export async function listRecipients(role: Role, active: 'true' | 'false' | 'all
   const filter = role === 'volunteer' ? 'true' : active;
   const where = filter === 'all' ? {} : { active: filter === 'true' };
   const rows = await Recipient.findAll({ where, include: [{ model: Need, as: 'needs' }], order: [['name', 'ASC']] });
-  const counts = await needCounts(rows.flatMap((r) => (r.needs ?? []).map((n) => n.id)));
+  const counts = await needCounts(rows.flatMap((r) => (r.needs ?? []).map((n) => n.id)), { blankets: seesContacts(role) });
   return rows.map((r) => recipientView(r, role, counts));
 }
 
@@ -92,7 +92,7 @@ async function loadRecipient(id: number, transaction?: Transaction): Promise<Rec
 export async function getRecipient(id: number, role: Role): Promise<RecipientView> {
   const r = await loadRecipient(id);
   if (role === 'volunteer' && !r.active) throw notFound('That recipient');
-  const counts = await needCounts((r.needs ?? []).map((n) => n.id));
+  const counts = await needCounts((r.needs ?? []).map((n) => n.id), { blankets: seesContacts(role) });
   return recipientView(r, role, counts);
 }
 
@@ -179,7 +179,7 @@ export async function createNeed(recipientId: number, input: NeedCreate): Promis
     deadline: input.deadline,
     preferences: input.preferences ?? null,
   });
-  return needView(need, new Map());
+  return needView(need, new Map(), true);
 }
 
 export async function updateNeed(recipientId: number, needId: number, input: NeedUpdate): Promise<NeedView> {
@@ -190,7 +190,7 @@ export async function updateNeed(recipientId: number, needId: number, input: Nee
   if (input.deadline !== undefined) need.deadline = input.deadline;
   if (input.preferences !== undefined) need.preferences = input.preferences;
   await need.save();
-  return needView(need, await needCounts([need.id]));
+  return needView(need, await needCounts([need.id]), true);
 }
 
 export async function deleteNeed(recipientId: number, needId: number): Promise<void> {
