@@ -48,8 +48,25 @@ function needView(n: Need, counts: CountsByNeed, withBlankets: boolean): NeedVie
   return view;
 }
 
+/**
+ * A recipient's guidelines read back and described, kept per id, version and last change: reading
+ * them through the schema on every list was most of what a list of recipients cost.
+ */
+const readGuidelines = new Map<string, { guidelines: GuidelineSet; summary: string[] }>();
+function guidelinesAndSummary(r: Recipient) {
+  const key = `${r.id}:${r.version}:${new Date(r.updatedAt).getTime()}`;
+  let known = readGuidelines.get(key);
+  if (!known) {
+    const guidelines = storedGuidelines(r);
+    known = { guidelines, summary: describeGuidelines(guidelines) };
+    if (readGuidelines.size >= 500) readGuidelines.clear();
+    readGuidelines.set(key, known);
+  }
+  return known;
+}
+
 function recipientView(r: Recipient, role: Role, counts: CountsByNeed): RecipientView {
-  const guidelines = storedGuidelines(r);
+  const { guidelines, summary } = guidelinesAndSummary(r);
   const needs = [...(r.needs ?? [])].sort((a, b) => a.deadline.localeCompare(b.deadline) || a.id - b.id);
   const view: RecipientView = {
     id: r.id,
@@ -62,7 +79,7 @@ function recipientView(r: Recipient, role: Role, counts: CountsByNeed): Recipien
     active: r.active,
     version: r.version,
     guidelines,
-    guidelineSummary: describeGuidelines(guidelines),
+    guidelineSummary: summary,
     needs: needs.map((n) => needView(n, counts, seesContacts(role))),
   };
   if (seesContacts(role)) {
