@@ -14,7 +14,7 @@ import type { GuidelineCheckResult } from './guidelines';
 import type { Caution, RecipientBrief } from './pledge';
 import { MAX_REASON_LENGTH } from '../blankets/status';
 import { BORDER_LIBRARY } from '../border/library';
-import { PageQuerySchema, SearchSchema } from './page';
+import { PageQuerySchema, SearchSchema } from './page-query';
 
 export const MAX_NOTES_LENGTH = 2000;
 export const MAX_COLOURS_LENGTH = 200;

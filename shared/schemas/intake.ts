@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { BlanketFieldsSchema, MAX_SIDE_CM, type BlanketStatus, type Population } from './blanket';
 import type { GuidelineCheckResult, GuidelineSet } from './guidelines';
 import { IsoDaySchema } from './recipient';
-import { PageQuerySchema } from './page';
+import { PageQuerySchema } from './page-query';
 import { normaliseCode } from '../blankets/code';
 
 const id = (label: string) =>

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { SizeCategorySchema, type BlanketStatus, type Population } from './blanket';
 import type { GuidelineSet } from './guidelines';
 import { IsoDaySchema } from './recipient';
-import { PageQuerySchema, SearchSchema } from './page';
+import { PageQuerySchema, SearchSchema } from './page-query';
 
 /** Most blankets one person promises in one pledge; past this it is a typing slip, not a plan. */
 export const MAX_PLEDGE_QUANTITY = 50;

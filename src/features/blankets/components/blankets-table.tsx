@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Field, Input, Select } from '@/components/ui/field';
 import { formatDay } from '@/components/ui/format-day';
 import { cn } from '@/components/ui/cn';
-import { BLANKET_STATUSES, type BlanketStatus } from '@shared/schemas/blanket';
+import type { BlanketStatus } from '@shared/schemas/blanket';
 import type { BlanketSort, BlanketSummary } from '@shared/schemas/blanket-log';
 import { pageCount } from '@shared/schemas/page';
 import { Loading } from '@/components/ui/spinner';
@@ -173,7 +173,7 @@ export function BlanketsTable({ mine, showMaker = false, empty }: { mine: boolea
           {({ id }) => (
             <Select id={id} value={status} onChange={(e) => setStatus(e.target.value as BlanketStatus | '')}>
               <option value="">All</option>
-              {BLANKET_STATUSES.map((s) => (
+              {(Object.keys(STATUS_LABELS) as BlanketStatus[]).map((s) => (
                 <option key={s} value={s}>
                   {STATUS_LABELS[s]}
                 </option>
