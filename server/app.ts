@@ -1,6 +1,7 @@
 import express, { type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
+import compression from 'compression';
 import path from 'node:path';
 import fs from 'node:fs';
 import type { Sequelize } from 'sequelize';
@@ -11,6 +12,9 @@ import { csrfProtection } from './auth/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { mountRoutes, type RouteDef } from './modules/route-table';
 import { allRoutes } from './modules/all-routes';
+
+/** How stale the session's stamp (and its stored expiry) may grow before a request renews it. */
+export const TOUCH_EVERY_MS = 60_000;
 
 export interface AppDeps {
   sequelize: Sequelize;
@@ -40,19 +44,26 @@ export function createApp(deps: AppDeps): KindloopApp {
       },
     }),
   );
+  // gzip for the API's JSON and the built client alike: lists and bundles shrink to about a third.
+  app.use(compression());
   app.use('/api', express.json({ limit: '200kb' }));
 
   const SequelizeStore = connectSessionSequelize(session.Store);
-  const store = new SequelizeStore({
+  // disableTouch is an option of the store (7.x) that its type declarations leave out.
+  const storeOptions: ConstructorParameters<typeof SequelizeStore>[0] & { disableTouch: boolean } = {
     db: sequelize,
     table: 'Session',
     checkExpirationInterval: 15 * 60_000,
+    // express-session touches the store after every request it did not save; the stamp below saves
+    // the row at most once a minute instead, which moves its expiry along with it.
+    disableTouch: true,
     extendDefaultFields: (defaults: { data: string; expires: Date }, s: { passport?: { user?: number } }) => ({
       data: defaults.data,
       expires: defaults.expires,
       userId: s.passport?.user ?? null,
     }),
-  });
+  };
+  const store = new SequelizeStore(storeOptions);
   const passport = configurePassport(config.scryptLogN);
 
   app.use(
@@ -82,9 +93,12 @@ export function createApp(deps: AppDeps): KindloopApp {
     if (last !== undefined && now - last > idleMs) {
       return req.session.regenerate((err) => next(err));
     }
-    // Only sessions that hold something are stamped; an anonymous GET creates no row.
+    // Only sessions that hold something are stamped; an anonymous GET creates no row. A changed
+    // stamp makes express-session write the row, so it is renewed at most once a minute: a read
+    // does not cost a write, and the idle limit and the stored expiry lag by under a minute.
     const held = req.session as typeof req.session & { passport?: { user?: number } };
-    if (held.passport?.user !== undefined || held.csrfToken) req.session.lastSeen = now;
+    const holds = held.passport?.user !== undefined || held.csrfToken;
+    if (holds && (last === undefined || now - last >= TOUCH_EVERY_MS)) req.session.lastSeen = now;
     next();
   });
   app.use('/api', passport.initialize());

@@ -3,6 +3,7 @@ import type { Sequelize } from 'sequelize';
 import * as m0001 from './migrations/0001-foundation';
 import * as m0002 from './migrations/0002-drive-data';
 import * as m0003 from './migrations/0003-measured-size';
+import * as m0010 from './migrations/0010-read-indexes';
 
 /**
  * Migrations are listed here in order rather than globbed, so the same list works under tsx, in
@@ -12,6 +13,7 @@ const migrations = [
   { name: '0001-foundation', ...m0001 },
   { name: '0002-drive-data', ...m0002 },
   { name: '0003-measured-size', ...m0003 },
+  { name: '0010-read-indexes', ...m0010 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

@@ -2,11 +2,12 @@ import { Sequelize, Transaction, TimeoutError } from 'sequelize';
 import { AsyncLocalStorage } from 'node:async_hooks';
 import fs from 'node:fs';
 import path from 'node:path';
+import { cachingSqlite3 } from './sqlite-column-cache';
 
 /**
  * How long a statement waits for another connection's write lock before SQLite answers SQLITE_BUSY.
  * Set on every connection, because Sequelize's SQLite dialect opens a fresh one per transaction and
- * node-sqlite3 gives each new connection a 1 s default (docs/decisions/0005-one-writer.md).
+ * node-sqlite3 gives each new connection a 1 s default (docs/decisions/0006-synchronous-normal.md).
  */
 export const BUSY_TIMEOUT_MS = 5000;
 
@@ -30,7 +31,7 @@ function preparePerConnection(sequelize: Sequelize) {
     if (!prepared.has(connection)) {
       prepared.add(connection);
       connection.configure('busyTimeout', BUSY_TIMEOUT_MS);
-      // WAL + NORMAL survives a crash of the process (docs/decisions/0005-one-writer.md).
+      // WAL + NORMAL survives a crash of the process (docs/decisions/0006-synchronous-normal.md).
       await new Promise<void>((resolve, reject) =>
         connection.exec('PRAGMA foreign_keys = ON; PRAGMA synchronous = NORMAL;', (err) => (err ? reject(err) : resolve())),
       );
@@ -98,6 +99,8 @@ export async function openDatabase(databasePath: string): Promise<Sequelize> {
   const sequelize = new Sequelize({
     dialect: 'sqlite',
     storage: databasePath,
+    // Remembers each table's columns instead of asking SQLite again before every SELECT.
+    dialectModule: cachingSqlite3,
     logging: false,
     pool: { max: 1, min: 1, idle: 60_000 },
     transactionType: Transaction.TYPES.IMMEDIATE,

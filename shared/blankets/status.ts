@@ -194,3 +194,15 @@ export function timeline(status: BlanketStatus): TimelineStep[] {
   const at = MAIN_LINE.indexOf(status);
   return MAIN_LINE.map((s, i) => step(s, i < at ? 'done' : i === at ? (status === 'delivered' ? 'done' : 'current') : 'upcoming'));
 }
+
+/** With the organisers and not yet given to a recipient: received, checked, or held for a fix. */
+export const WITH_ORGANISERS: readonly BlanketStatus[] = ['received', 'checked', 'needs_fix'];
+
+/** Given to a recipient: assigned, packed or delivered. */
+export const ASSIGNED_STATUSES: readonly BlanketStatus[] = ['assigned', 'packed', 'delivered'];
+
+/** In the organisers' hands or beyond: every blanket that has reached them and was not declined. */
+export const IN_HAND: readonly BlanketStatus[] = [...WITH_ORGANISERS, ...ASSIGNED_STATUSES];
+
+/** Made and not turned away: anything past in progress except declined, which a pledge must replace. */
+export const FINISHED_STATUSES: readonly BlanketStatus[] = ['finished', 'booked', ...IN_HAND];

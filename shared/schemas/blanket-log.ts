@@ -14,6 +14,7 @@ import type { GuidelineCheckResult } from './guidelines';
 import type { Caution, RecipientBrief } from './pledge';
 import { MAX_REASON_LENGTH } from '../blankets/status';
 import { BORDER_LIBRARY } from '../border/library';
+import { PageQuerySchema, SearchSchema } from './page-query';
 
 export const MAX_NOTES_LENGTH = 2000;
 export const MAX_COLOURS_LENGTH = 200;
@@ -113,11 +114,17 @@ export const LOG_FIELDS = [
 
 const flag = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
 
-/** GET /api/blankets */
-export const BlanketListQuerySchema = z.object({
+/** The columns the blanket list sorts by on the server; status follows a blanket's life, size its area. */
+export const BLANKET_SORTS = ['createdAt', 'code', 'status', 'recipient', 'size', 'maker', 'colours'] as const;
+export type BlanketSort = (typeof BLANKET_SORTS)[number];
+
+/** GET /api/blankets: one page, newest first unless `sort`/`dir` say otherwise; `q` searches code, colours, recipient and maker. */
+export const BlanketListQuerySchema = PageQuerySchema.extend({
   mine: flag.optional(),
   status: BlanketStatusSchema.optional(),
   pledgeId: z.coerce.number().int().positive().optional(),
+  sort: z.enum(BLANKET_SORTS, { error: `sort is one of ${BLANKET_SORTS.join(', ')}` }).default('createdAt'),
+  q: SearchSchema,
 });
 export type BlanketListQuery = z.infer<typeof BlanketListQuerySchema>;
 

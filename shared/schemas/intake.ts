@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { BlanketFieldsSchema, MAX_SIDE_CM, type BlanketStatus, type Population } from './blanket';
 import type { GuidelineCheckResult, GuidelineSet } from './guidelines';
 import { IsoDaySchema } from './recipient';
+import { PageQuerySchema } from './page-query';
 import { normaliseCode } from '../blankets/code';
 
 const id = (label: string) =>
@@ -201,9 +202,15 @@ export function suggestOutcome(
   }
 }
 
+const listPage = (name: string) => z.coerce.number({ error: `${name} must be a number` }).int(`${name} must be a whole number`).min(1, `${name} starts at 1`).default(1);
+
+/** The day's lists come whole; the waiting and the expected lists come a page at a time. */
 export const IntakeQueueQuerySchema = z.object({
   siteId: z.coerce.number({ error: 'siteId must be a number' }).int().positive('siteId must be more than 0'),
   date: IsoDaySchema,
+  waitingPage: listPage('waitingPage'),
+  expectedPage: listPage('expectedPage'),
+  pageSize: PageQuerySchema.shape.pageSize,
 });
 export type IntakeQueueQuery = z.infer<typeof IntakeQueueQuerySchema>;
 
@@ -317,10 +324,16 @@ export interface IntakeQueue {
   date: string;
   /** Received at this site on this day. */
   arrived: IntakeQueueItem[];
-  /** At this site, received and not yet inspected (by the end of this day). */
+  /** At this site, received and not yet inspected (by the end of this day): one page, oldest first. */
   waiting: IntakeQueueItem[];
+  waitingTotal: number;
+  waitingPage: number;
   /** Inspected on this day, with the outcome as its status. */
   inspected: IntakeQueueItem[];
   /** Booked to come to this site (the day comes with drop-off scheduling). */
   expected: IntakeQueueItem[];
+  expectedTotal: number;
+  expectedPage: number;
+  /** Rows per page of the waiting and the expected lists. */
+  pageSize: number;
 }

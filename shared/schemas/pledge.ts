@@ -1,7 +1,8 @@
 import { z } from 'zod';
-import { SizeCategorySchema, type Population } from './blanket';
+import { SizeCategorySchema, type BlanketStatus, type Population } from './blanket';
 import type { GuidelineSet } from './guidelines';
 import { IsoDaySchema } from './recipient';
+import { PageQuerySchema, SearchSchema } from './page-query';
 
 /** Most blankets one person promises in one pledge; past this it is a typing slip, not a plan. */
 export const MAX_PLEDGE_QUANTITY = 50;
@@ -52,10 +53,16 @@ export type PledgeUpdate = z.infer<typeof PledgeUpdateSchema>;
 const flag = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
 
 /** GET /api/pledges. Organisers and coordinators see everyone's unless they ask for `mine`. */
-export const PledgeListQuerySchema = z.object({
+export const PLEDGE_SORTS = ['dueDate', 'createdAt', 'quantity', 'status', 'maker'] as const;
+export type PledgeSort = (typeof PLEDGE_SORTS)[number];
+
+/** One page, soonest due first unless `sort`/`dir` say otherwise; `q` searches the maker's name. */
+export const PledgeListQuerySchema = PageQuerySchema.extend({
   mine: flag.optional(),
   status: PledgeStatusSchema.optional(),
   needId: z.coerce.number().int().positive().optional(),
+  sort: z.enum(PLEDGE_SORTS, { error: `sort is one of ${PLEDGE_SORTS.join(', ')}` }).default('dueDate'),
+  q: SearchSchema,
 });
 export type PledgeListQuery = z.infer<typeof PledgeListQuerySchema>;
 
@@ -102,6 +109,31 @@ export interface RecipientBrief {
   guidelines: GuidelineSet;
   guidelineSummary: string[];
   cautions: Caution[];
+}
+
+/**
+ * The figures every page and chart shows for one need, all from one aggregate query
+ * (server/modules/pledges/need-counts.ts), so that no two pages can disagree.
+ */
+export interface NeedCounts {
+  needId: number;
+  recipientId: number;
+  /** Blankets the recipient asked for. */
+  wanted: number;
+  /** Promised in active or fulfilled pledges: a fulfilled pledge's blankets are made, so no longer wanted. */
+  pledged: number;
+  /** Blankets under those pledges that are made and not declined (see FINISHED_STATUSES). */
+  finished: number;
+  /** Of those, the ones with the organisers now (WITH_ORGANISERS). */
+  inHand: number;
+  /** Of those, the ones given to a recipient (ASSIGNED_STATUSES). */
+  assigned: number;
+}
+
+/** The drive's progress for the staff home page: per recipient, and blankets per status. */
+export interface DriveProgress {
+  recipients: Array<{ recipientId: number; name: string; wanted: number; pledged: number; finished: number; inHand: number; assigned: number }>;
+  statuses: Array<{ status: BlanketStatus; count: number }>;
 }
 
 /** An open need as a volunteer sees it in "What's needed". */

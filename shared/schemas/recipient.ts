@@ -168,8 +168,14 @@ export interface NeedView {
   quantity: number;
   deadline: string;
   preferences: string | null;
-  /** Blankets promised against this need by active pledges. */
+  /** Blankets promised against this need by active or fulfilled pledges (see NeedCounts). */
   pledged: number;
+  /** Made and not declined, under pledges for this need (for organisers and coordinators). */
+  finished?: number;
+  /** With the organisers: received, checked or held for a fix (for organisers and coordinators). */
+  inHand?: number;
+  /** Assigned, packed or delivered (for organisers and coordinators). */
+  assigned?: number;
   version: number;
 }
 

@@ -74,7 +74,7 @@ describe('the demo', () => {
   it('gives the demo volunteer three blankets in three different statuses', async () => {
     const res = await vol.get('/api/blankets');
     expect(res.status).toBe(200);
-    const mine = res.body.blankets as BlanketSummary[];
+    const mine = res.body.items as BlanketSummary[];
     expect(mine).toHaveLength(3);
     expect(new Set(mine.map((b) => b.status)).size).toBe(3);
   });
@@ -179,7 +179,7 @@ describe('POST /api/blankets', () => {
   });
 
   it("answers 404 naming pledgeId for someone else's pledge", async () => {
-    const theirs = ((await maren.get('/api/pledges')).body.pledges as PledgeView[])[0]!;
+    const theirs = ((await maren.get('/api/pledges')).body.items as PledgeView[])[0]!;
     const count = await Blanket.count();
     const res = await vol.post('/api/blankets', { ...goodPreemie, pledgeId: theirs.id });
     expect(res.status).toBe(404);
@@ -228,7 +228,7 @@ describe('POST /api/blankets', () => {
 describe('blanket ownership', () => {
   let marens: BlanketSummary;
   beforeAll(async () => {
-    marens = ((await maren.get('/api/blankets')).body.blankets as BlanketSummary[])[0]!;
+    marens = ((await maren.get('/api/blankets')).body.items as BlanketSummary[])[0]!;
   });
 
   it("answers 404 to a volunteer for someone else's blanket, and changes nothing", async () => {
@@ -240,21 +240,23 @@ describe('blanket ownership', () => {
 
   it("lists only a volunteer's own blankets", async () => {
     const me = await User.findOne({ where: { email: 'volunteer@example.org' } });
-    const list = (await vol.get('/api/blankets')).body.blankets as BlanketSummary[];
+    const list = (await vol.get('/api/blankets')).body.items as BlanketSummary[];
     expect(list.length).toBeGreaterThan(0);
     expect(list.every((b) => b.userId === me!.id)).toBe(true);
   });
 
   it("lets organisers and coordinators read every blanket, with the maker's name", async () => {
-    const all = (await organiser.get('/api/blankets')).body.blankets as BlanketSummary[];
-    expect(all.length).toBe(await Blanket.count());
+    const res = await organiser.get('/api/blankets?pageSize=100');
+    const all = res.body.items as BlanketSummary[];
+    expect(res.body.total).toBe(await Blanket.count());
+    expect(all.length).toBe(Math.min(100, res.body.total));
     expect(all.find((b) => b.id === marens.id)?.makerName).toBe('Maren Oakley');
     expect((await coordinator.get(`/api/blankets/${marens.id}`)).status).toBe(200);
-    expect((await organiser.get('/api/blankets?mine=1')).body.blankets).toEqual([]);
+    expect((await organiser.get('/api/blankets?mine=1')).body.items).toEqual([]);
   });
 
   it('filters the list by status', async () => {
-    const booked = (await organiser.get('/api/blankets?status=booked')).body.blankets as BlanketSummary[];
+    const booked = (await organiser.get('/api/blankets?status=booked')).body.items as BlanketSummary[];
     expect(booked.length).toBeGreaterThan(0);
     expect(booked.every((b) => b.status === 'booked')).toBe(true);
     expect((await organiser.get('/api/blankets?status=lost')).status).toBe(400);
@@ -458,7 +460,7 @@ describe('PATCH /api/blankets/:id: status moves', () => {
   });
 
   it('offers each person only the moves they can make', async () => {
-    const booked = ((await vol.get('/api/blankets')).body.blankets as BlanketSummary[]).find((b) => b.status === 'booked')!;
+    const booked = ((await vol.get('/api/blankets')).body.items as BlanketSummary[]).find((b) => b.status === 'booked')!;
     const mine = (await vol.get(`/api/blankets/${booked.id}`)).body.blanket as BlanketDetail;
     expect(mine.moves).toEqual([{ to: 'finished', direction: 'back', action: expect.any(String) }]);
     const theirs = (await organiser.get(`/api/blankets/${booked.id}`)).body.blanket as BlanketDetail;

@@ -87,7 +87,7 @@ describe('the demo volunteer', () => {
   it('has two pledges, one of them late', async () => {
     const res = await vol.get('/api/pledges');
     expect(res.status).toBe(200);
-    const pledges = res.body.pledges as PledgeView[];
+    const pledges = res.body.items as PledgeView[];
     expect(pledges).toHaveLength(2);
     expect(pledges.filter((p) => p.late)).toHaveLength(1);
     expect(pledges.every((p) => p.need?.recipient.name)).toBe(true);
@@ -173,7 +173,7 @@ describe('POST /api/pledges', () => {
     expect(created.status).toBe(400);
     expect(created.body.error.message).toMatch(/userId/);
     expect(await Pledge.count()).toBe(count);
-    const mine = (await vol.get('/api/pledges')).body.pledges as PledgeView[];
+    const mine = (await vol.get('/api/pledges')).body.items as PledgeView[];
     const res = await vol.patch(`/api/pledges/${mine[0]!.id}`, { quantity: 2, userId: 1 });
     expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/userId/);
@@ -183,7 +183,7 @@ describe('POST /api/pledges', () => {
 describe('pledge ownership', () => {
   let marenPledge: PledgeView;
   beforeAll(async () => {
-    marenPledge = ((await other.get('/api/pledges')).body.pledges as PledgeView[])[0]!;
+    marenPledge = ((await other.get('/api/pledges')).body.items as PledgeView[])[0]!;
   });
 
   it("answers 404 to a volunteer for someone else's pledge, whatever the verb", async () => {
@@ -198,16 +198,17 @@ describe('pledge ownership', () => {
   it("lists only a volunteer's own pledges", async () => {
     const me = await User.findOne({ where: { email: 'volunteer@example.org' } });
     const res = await vol.get('/api/pledges');
-    expect((res.body.pledges as PledgeView[]).every((p) => p.userId === me!.id)).toBe(true);
+    expect((res.body.items as PledgeView[]).every((p) => p.userId === me!.id)).toBe(true);
   });
 
   it("lets organisers and coordinators read everyone's pledges, and ask for only their own", async () => {
-    const all = await organiser.get('/api/pledges');
+    const all = await organiser.get('/api/pledges?pageSize=100');
     expect(all.status).toBe(200);
-    expect((all.body.pledges as PledgeView[]).length).toBe(await Pledge.count());
-    expect((all.body.pledges as PledgeView[]).find((p) => p.id === marenPledge.id)?.makerName).toBe('Maren Oakley');
+    expect(all.body.total).toBe(await Pledge.count());
+    expect((all.body.items as PledgeView[]).length).toBe(Math.min(100, all.body.total));
+    expect((all.body.items as PledgeView[]).find((p) => p.id === marenPledge.id)?.makerName).toBe('Maren Oakley');
     expect((await coordinator.get(`/api/pledges/${marenPledge.id}`)).status).toBe(200);
-    expect((await organiser.get('/api/pledges?mine=true')).body.pledges).toEqual([]);
+    expect((await organiser.get('/api/pledges?mine=true')).body.items).toEqual([]);
   });
 
   it("does not let an organiser change someone else's pledge (403)", async () => {
@@ -219,7 +220,7 @@ describe('pledge ownership', () => {
 
 describe('PATCH and DELETE /api/pledges/:id', () => {
   it('pushes a late pledge back so it is no longer late', async () => {
-    const late = ((await vol.get('/api/pledges')).body.pledges as PledgeView[]).find((p) => p.late)!;
+    const late = ((await vol.get('/api/pledges')).body.items as PledgeView[]).find((p) => p.late)!;
     const res = await vol.patch(`/api/pledges/${late.id}`, { dueDate: day(14), version: late.version });
     expect(res.status).toBe(200);
     expect(res.body.pledge).toMatchObject({ id: late.id, late: false, dueDate: day(14) });
@@ -227,7 +228,7 @@ describe('PATCH and DELETE /api/pledges/:id', () => {
   });
 
   it('flags a push-back past the need deadline instead of refusing it', async () => {
-    const mine = ((await vol.get('/api/pledges')).body.pledges as PledgeView[]).find((p) => p.need)!;
+    const mine = ((await vol.get('/api/pledges')).body.items as PledgeView[]).find((p) => p.need)!;
     const after = new Date(Date.parse(`${mine.need!.deadline}T00:00:00Z`) + 5 * 86_400_000).toISOString().slice(0, 10);
     const res = await vol.patch(`/api/pledges/${mine.id}`, { dueDate: after });
     expect(res.status).toBe(200);
@@ -235,14 +236,14 @@ describe('PATCH and DELETE /api/pledges/:id', () => {
   });
 
   it('refuses a stale version with 409', async () => {
-    const p = ((await vol.get('/api/pledges')).body.pledges as PledgeView[])[0]!;
+    const p = ((await vol.get('/api/pledges')).body.items as PledgeView[])[0]!;
     const res = await vol.patch(`/api/pledges/${p.id}`, { quantity: p.quantity, version: p.version - 1 });
     expect(res.status).toBe(409);
     expect(res.body.error.issues[0].path).toBe('version');
   });
 
   it('refuses to reduce a pledge below the blankets already logged under it', async () => {
-    const p = ((await vol.get('/api/pledges')).body.pledges as PledgeView[]).find((x) => x.blanketsLogged === 2)!;
+    const p = ((await vol.get('/api/pledges')).body.items as PledgeView[]).find((x) => x.blanketsLogged === 2)!;
     const res = await vol.patch(`/api/pledges/${p.id}`, { quantity: 1 });
     expect(res.status).toBe(409);
     expect(res.body.error.issues[0].path).toBe('quantity');
@@ -250,7 +251,7 @@ describe('PATCH and DELETE /api/pledges/:id', () => {
   });
 
   it('refuses to cancel a pledge that has blankets, and says to reduce it instead', async () => {
-    const p = ((await vol.get('/api/pledges')).body.pledges as PledgeView[]).find((x) => x.blanketsLogged > 0)!;
+    const p = ((await vol.get('/api/pledges')).body.items as PledgeView[]).find((x) => x.blanketsLogged > 0)!;
     const res = await vol.delete(`/api/pledges/${p.id}`);
     expect(res.status).toBe(409);
     expect(res.body.error.message).toMatch(/reduce it/);
@@ -267,7 +268,7 @@ describe('PATCH and DELETE /api/pledges/:id', () => {
     expect(cancelled.body.pledge.status).toBe('cancelled');
     expect((await vol.patch(`/api/pledges/${id}`, { quantity: 3 })).status).toBe(409);
     // Cancelled pledges no longer count towards a need.
-    expect(((await vol.get('/api/pledges?status=cancelled')).body.pledges as PledgeView[]).map((p) => p.id)).toContain(id);
+    expect(((await vol.get('/api/pledges?status=cancelled')).body.items as PledgeView[]).map((p) => p.id)).toContain(id);
   });
 
   it('moves a pledge with no blankets to another need, checking the size against it', async () => {
@@ -283,7 +284,7 @@ describe('PATCH and DELETE /api/pledges/:id', () => {
   });
 
   it('refuses an empty change', async () => {
-    const p = ((await vol.get('/api/pledges')).body.pledges as PledgeView[])[0]!;
+    const p = ((await vol.get('/api/pledges')).body.items as PledgeView[])[0]!;
     expect((await vol.patch(`/api/pledges/${p.id}`, {})).status).toBe(400);
   });
 });

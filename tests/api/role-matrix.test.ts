@@ -16,6 +16,7 @@ const COORDINATOR: Row = [401, 403, 403, 'ok'];
 
 const matrix: Record<string, Row> = {
   'GET /api/drive': PUBLIC,
+  'GET /api/drive/progress': STAFF,
   'GET /api/health': PUBLIC,
   'GET /api/auth/csrf': PUBLIC,
   'POST /api/auth/register': PUBLIC,

@@ -28,7 +28,7 @@ describe('demo photos', () => {
 
   it('serves them to the maker through the authorised route', async () => {
     const c = await signedIn(t.app, 'volunteer@example.org');
-    const list = (await c.get('/api/blankets?mine=true')).body.blankets as Array<{ coverPhoto: { thumbUrl: string } | null }>;
+    const list = (await c.get('/api/blankets?mine=true')).body.items as Array<{ coverPhoto: { thumbUrl: string } | null }>;
     const withPhoto = list.find((b) => b.coverPhoto);
     expect(withPhoto).toBeTruthy();
     const res = await c.get(withPhoto!.coverPhoto!.thumbUrl);

@@ -1,15 +1,16 @@
 /**
- * Starts Kindloop for the browser tests: a freshly built client and a new temporary database seeded
+ * Starts Kindloop for the browser tests: an up-to-date built client and a new temporary database seeded
  * with the demo drive, on a port of its own, so the tests never touch data/.
  */
-import { execSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { buildIfChanged } from '../../scripts/build-if-changed';
 import { E2E_PASSWORD } from './password';
 
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'kindloop-e2e-'));
-if (!process.env.E2E_SKIP_BUILD) execSync('npx vite build --logLevel warn', { stdio: 'inherit' });
+// Builds only when the client's sources changed since the last build.
+if (!process.env.E2E_SKIP_BUILD) buildIfChanged();
 
 // NODE_ENV is left as `npm start` leaves it, so the browser tests run the configuration people get.
 Object.assign(process.env, {

@@ -8,11 +8,11 @@ import { blanketDetail, createBlanket, listBlankets, updateBlanket } from './bla
 export function blanketRoutes(sequelize: Sequelize): RouteDef[] {
   return [
     {
-      method: 'get', path: '/api/blankets', access: 'signed-in', summary: 'Blankets: your own, or everyone\'s for organisers',
+      method: 'get', path: '/api/blankets', access: 'signed-in', summary: 'One page of blankets (your own, or everyone\'s for staff), filtered, searched and sorted',
       handlers: [
         validate({ query: BlanketListQuerySchema }),
         async (req, res) => {
-          res.json({ blankets: await listBlankets(req.user!, req.query as unknown as BlanketListQuery) });
+          res.json(await listBlankets(req.user!, req.query as unknown as BlanketListQuery));
         },
       ],
     },

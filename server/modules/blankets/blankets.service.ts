@@ -1,4 +1,4 @@
-import type { Transaction } from 'sequelize';
+import { Op, col, fn, literal, where as sqlWhere, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import { Blanket } from '../../db/models/blanket';
 import { BlanketEvent } from '../../db/models/blanket-event';
 import { Photo } from '../../db/models/photo';
@@ -16,6 +16,7 @@ import {
   type BlanketDetail,
   type BlanketEventView,
   type BlanketListQuery,
+  type BlanketSort,
   type BlanketSummary,
   type BlanketUpdate,
   type PhotoView,
@@ -26,6 +27,7 @@ import { check, evaluate, type OtherRecipient } from '@shared/guidelines/check';
 import { activeRecipients, guidelinesOf, recipientBrief } from '../pledges/recipient-brief';
 import { readsAll, refreshPledgeStatus, type Actor } from '../pledges/pledges.service';
 import { uniqueBlanketCode } from './blanket-code';
+import type { Page } from '@shared/schemas/page';
 
 /** BlanketEvent.data is free-form JSON; the model's creation type can't say so. */
 const eventData = (v: unknown) => v as BlanketEvent['data'];
@@ -106,13 +108,67 @@ function summaryOf(b: Loaded): BlanketSummary {
   };
 }
 
-export async function listBlankets(actor: Actor, q: BlanketListQuery): Promise<BlanketSummary[]> {
-  const where: Record<string, unknown> = {};
+/** Sorting by status follows a blanket's life, the order the stepper shows, not the alphabet. */
+export const STATUS_ORDER: readonly BlanketStatus[] = ['in_progress', 'finished', 'booked', 'received', 'needs_fix', 'declined', 'checked', 'assigned', 'packed', 'delivered'];
+
+const statusRank = literal(`CASE \`Blanket\`.\`status\` ${STATUS_ORDER.map((st, i) => `WHEN '${st}' THEN ${i}`).join(' ')} END`);
+
+function listOrder(sort: BlanketSort, dir: 'ASC' | 'DESC'): Order {
+  // The id breaks ties, so a row never shows on two pages.
+  switch (sort) {
+    case 'createdAt':
+      return [['createdAt', dir], ['id', dir]];
+    case 'code':
+      return [['code', dir]];
+    case 'status':
+      return [[statusRank, dir], ['id', 'DESC']];
+    case 'recipient':
+      return [[{ model: Recipient, as: 'recipient' }, 'name', dir], ['id', 'DESC']];
+    case 'size':
+      return [[literal('`Blanket`.`widthCm` * `Blanket`.`lengthCm`'), dir], ['id', 'DESC']];
+    case 'maker':
+      return [[{ model: User, as: 'maker' }, 'name', dir], ['id', 'DESC']];
+    case 'colours':
+      return [['colours', dir], ['id', 'DESC']];
+  }
+}
+
+/** Case-blind "contains" without LIKE, so % and _ in a search are plain characters. */
+const contains = (column: string, q: string) => sqlWhere(fn('instr', fn('lower', col(column)), q.toLowerCase()), Op.gt, 0);
+
+/** One page of blankets: the maker's own, or everyone's for staff; filtered, searched and sorted here. */
+export async function listBlankets(actor: Actor, q: BlanketListQuery): Promise<Page<BlanketSummary>> {
+  const where: WhereOptions = {};
   if (!readsAll(actor) || q.mine) where.userId = actor.id;
   if (q.status) where.status = q.status;
   if (q.pledgeId) where.pledgeId = q.pledgeId;
-  const rows = (await Blanket.findAll({ where, include: summaryInclude, order: [['createdAt', 'DESC'], ['id', 'DESC']] })) as Loaded[];
-  return rows.map(summaryOf);
+  if (q.q) {
+    (where as Record<symbol, unknown>)[Op.or] = [
+      contains('Blanket.code', q.q),
+      contains('Blanket.colours', q.q),
+      contains('recipient.name', q.q),
+      contains('maker.name', q.q),
+    ];
+  }
+  const include = [
+    { model: User, as: 'maker', attributes: ['id', 'name'] },
+    { model: Recipient, as: 'recipient', attributes: ['id', 'name'] },
+    { model: Pledge, as: 'pledge', attributes: ['id', 'sizeCategory'] },
+  ];
+  const dir = (q.dir ?? (q.sort === 'createdAt' ? 'desc' : 'asc')).toUpperCase() as 'ASC' | 'DESC';
+  const total = await Blanket.count({ where, include: q.q ? include.slice(0, 2) : [] });
+  const rows = (await Blanket.findAll({
+    where,
+    include,
+    order: listOrder(q.sort, dir),
+    limit: q.pageSize,
+    offset: (q.page - 1) * q.pageSize,
+  })) as Loaded[];
+  const photos = rows.length
+    ? await Photo.findAll({ where: { blanketId: { [Op.in]: rows.map((b) => b.id) } }, order: [['id', 'ASC']] })
+    : [];
+  for (const b of rows) b.photos = photos.filter((p) => p.blanketId === b.id);
+  return { items: rows.map(summaryOf), total, page: q.page, pageSize: q.pageSize };
 }
 
 /** The recipient's check, run on the logged fields; also which other recipients it would suit. */

@@ -1,6 +1,7 @@
 import { Drive } from '../../db/models/drive';
 import { User } from '../../db/models/user';
 import type { RouteDef } from '../route-table';
+import { driveProgress } from './progress.service';
 
 export function driveRoutes(): RouteDef[] {
   return [
@@ -11,6 +12,14 @@ export function driveRoutes(): RouteDef[] {
           const drive = await Drive.findOne({ order: [['id', 'ASC']] });
           const volunteers = await User.count({ where: { role: 'volunteer', active: true } });
           res.json({ drive, volunteers });
+        },
+      ],
+    },
+    {
+      method: 'get', path: '/api/drive/progress', access: ['organiser', 'coordinator'], summary: 'Wanted, pledged, finished, in hand and assigned per recipient; blankets per status',
+      handlers: [
+        async (_req, res) => {
+          res.json({ progress: await driveProgress() });
         },
       ],
     },

@@ -63,7 +63,7 @@ export function intakeRoutes(ctx: { sequelize: Sequelize; publicUrl: string }): 
         validate({ query: IntakeQueueQuerySchema }),
         async (req, res) => {
           const q = req.query as unknown as z.infer<typeof IntakeQueueQuerySchema>;
-          res.json({ queue: await service.queue(q.siteId, q.date) });
+          res.json({ queue: await service.queue(q) });
         },
       ],
     },

@@ -1,4 +1,4 @@
-import { Op, type Sequelize, type Transaction } from 'sequelize';
+import { Op, literal, where as sqlWhere, type Sequelize, type Transaction } from 'sequelize';
 import QRCode from 'qrcode';
 import { Blanket } from '../../db/models/blanket';
 import { BlanketEvent } from '../../db/models/blanket-event';
@@ -18,6 +18,7 @@ import {
   type IntakeBlanketView,
   type IntakeBody,
   type IntakeQueue,
+  type IntakeQueueQuery,
   type IntakeQueueItem,
   type InspectionBody,
   OUTCOME_LABELS,
@@ -327,33 +328,44 @@ function queueItem(b: LoadedBlanket, at: Date | null): IntakeQueueItem {
   };
 }
 
-export async function queue(siteId: number, isoDay: string): Promise<IntakeQueue> {
-  const site = await Site.findByPk(siteId);
+/** Enough of a blanket's maker, recipient and site for a row of the queue. */
+const QUEUE_INCLUDE = [
+  { model: User, as: 'maker', attributes: ['id', 'name'] },
+  { model: Recipient, as: 'recipient', attributes: ['id', 'name'] },
+];
+
+/**
+ * The queue at a site on a day: what arrived and what was inspected that day (bounded by the day),
+ * and a page each of what waits for inspection and what is booked to come (these two grow with the
+ * drive, so they come a page at a time with their totals).
+ */
+export async function queue(q: IntakeQueueQuery): Promise<IntakeQueue> {
+  const { siteId, date: isoDay, pageSize } = q;
+  const site = await Site.findByPk(siteId, { attributes: ['id', 'name'] });
   if (!site) throw notFound('That drop-off site');
   const [start, end] = dayBounds(isoDay);
   const inDay = { [Op.gte]: start, [Op.lt]: end };
 
-  const intakeEvents = await BlanketEvent.findAll({ where: { kind: 'intake', createdAt: inDay }, order: [['createdAt', 'ASC']] });
-  const inspectionEvents = await BlanketEvent.findAll({ where: { kind: 'inspection', createdAt: inDay }, order: [['createdAt', 'ASC']] });
-  const atSite = (e: BlanketEvent) => (e.data as { siteId?: number } | null)?.siteId === siteId;
-  const arrivedIds = intakeEvents.filter(atSite).map((e) => e.blanketId);
-  const inspectedIds = inspectionEvents.map((e) => e.blanketId);
-
-  const blankets = (await Blanket.findAll({
-    where: {
-      [Op.or]: [
-        { id: { [Op.in]: [...arrivedIds, ...inspectedIds] } },
-        { siteId, status: 'received', receivedAt: { [Op.lt]: end } },
-        { siteId, status: 'booked' },
-      ],
-    },
-    include: INCLUDE,
-    order: [['receivedAt', 'ASC'], ['id', 'ASC']],
-  })) as LoadedBlanket[];
-  const byId = new Map(blankets.map((b) => [b.id, b]));
+  // SQLite reads the site out of the intake record itself, so the day's records are never parsed here;
+  // inspections carry large records (the check) and only their time and blanket are needed.
+  const intakeEvents = await BlanketEvent.findAll({
+    attributes: ['id', 'blanketId', 'createdAt'],
+    where: { kind: 'intake', createdAt: inDay, [Op.and]: [sqlWhere(literal("json_extract(`BlanketEvent`.`data`, '$.siteId')"), siteId)] },
+    order: [['createdAt', 'ASC'], ['id', 'ASC']],
+  });
+  const inspectionEvents = await BlanketEvent.findAll({
+    attributes: ['id', 'blanketId', 'createdAt'],
+    where: { kind: 'inspection', createdAt: inDay },
+    order: [['createdAt', 'ASC'], ['id', 'ASC']],
+  });
+  const dayIds = [...new Set([...intakeEvents, ...inspectionEvents].map((e) => e.blanketId))];
+  const ofDay = dayIds.length
+    ? ((await Blanket.findAll({ where: { id: { [Op.in]: dayIds } }, include: QUEUE_INCLUDE })) as LoadedBlanket[])
+    : [];
+  const byId = new Map(ofDay.map((b) => [b.id, b]));
 
   const arrived: IntakeQueueItem[] = [];
-  for (const e of intakeEvents.filter(atSite)) {
+  for (const e of intakeEvents) {
     const b = byId.get(e.blanketId);
     if (b) arrived.push(queueItem(b, e.createdAt));
   }
@@ -366,13 +378,36 @@ export async function queue(siteId: number, isoDay: string): Promise<IntakeQueue
     seen.add(b.id);
     inspected.unshift(queueItem(b, e.createdAt));
   }
+
+  const waitingWhere = { siteId, status: 'received', receivedAt: { [Op.lt]: end } };
+  const expectedWhere = { siteId, status: 'booked' };
+  const [waitingTotal, expectedTotal] = [await Blanket.count({ where: waitingWhere }), await Blanket.count({ where: expectedWhere })];
+  const waiting = (await Blanket.findAll({
+    where: waitingWhere,
+    include: QUEUE_INCLUDE,
+    order: [['receivedAt', 'ASC'], ['id', 'ASC']],
+    limit: pageSize,
+    offset: (q.waitingPage - 1) * pageSize,
+  })) as LoadedBlanket[];
+  const expected = (await Blanket.findAll({
+    where: expectedWhere,
+    include: QUEUE_INCLUDE,
+    order: [['id', 'ASC']],
+    limit: pageSize,
+    offset: (q.expectedPage - 1) * pageSize,
+  })) as LoadedBlanket[];
   return {
     site: { id: site.id, name: site.name },
     date: isoDay,
     arrived,
-    waiting: blankets.filter((b) => b.siteId === siteId && b.status === 'received' && b.receivedAt && b.receivedAt < end).map((b) => queueItem(b, b.receivedAt)),
+    waiting: waiting.map((b) => queueItem(b, b.receivedAt ?? null)),
+    waitingTotal,
+    waitingPage: q.waitingPage,
     inspected,
-    expected: blankets.filter((b) => b.siteId === siteId && b.status === 'booked').map((b) => queueItem(b, null)),
+    expected: expected.map((b) => queueItem(b, null)),
+    expectedTotal,
+    expectedPage: q.expectedPage,
+    pageSize,
   };
 }
 

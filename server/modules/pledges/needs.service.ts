@@ -1,14 +1,15 @@
-import { Op } from 'sequelize';
+import { Op, col, fn } from 'sequelize';
 import { Need } from '../../db/models/need';
 import { Pledge } from '../../db/models/pledge';
 import { Recipient } from '../../db/models/recipient';
 import type { OpenNeed } from '@shared/schemas/pledge';
 import { recipientBrief, todayIso } from './recipient-brief';
+import { needCounts } from './need-counts';
 import type { Actor } from './pledges.service';
 
 /**
  * Open needs (deadline today or later, recipient active) with what is promised against each.
- * Fulfilled pledges still count: those blankets are made, so they are no longer wanted.
+ * Pledged comes from needCounts, shared with the recipient pages and the charts.
  */
 export async function listOpenNeeds(actor: Actor): Promise<OpenNeed[]> {
   const today = todayIso();
@@ -17,19 +18,20 @@ export async function listOpenNeeds(actor: Actor): Promise<OpenNeed[]> {
     include: [{ model: Recipient, as: 'recipient', where: { active: true } }],
     order: [['deadline', 'ASC'], ['id', 'ASC']],
   });
-  const pledges = await Pledge.findAll({
-    attributes: ['needId', 'userId', 'quantity', 'status'],
-    where: { needId: { [Op.in]: needs.map((n) => n.id) }, status: { [Op.in]: ['active', 'fulfilled'] } },
-  });
-  const pledged = new Map<number, number>();
+  const counts = await needCounts(needs.map((n) => n.id), { blankets: false });
   const mine = new Map<number, number>();
-  for (const p of pledges) {
-    pledged.set(p.needId!, (pledged.get(p.needId!) ?? 0) + p.quantity);
-    if (p.userId === actor.id && p.status === 'active') mine.set(p.needId!, (mine.get(p.needId!) ?? 0) + p.quantity);
+  if (needs.length > 0) {
+    const rows = (await Pledge.findAll({
+      attributes: ['needId', [fn('SUM', col('quantity')), 'total']],
+      where: { userId: actor.id, needId: { [Op.in]: needs.map((n) => n.id) }, status: 'active' },
+      group: ['needId'],
+      raw: true,
+    })) as unknown as Array<{ needId: number; total: number }>;
+    for (const r of rows) mine.set(r.needId, Number(r.total));
   }
   const briefs = new Map<number, ReturnType<typeof recipientBrief>>();
   return needs.map((n) => {
-    const total = pledged.get(n.id) ?? 0;
+    const total = counts.get(n.id)?.pledged ?? 0;
     const r = n.recipient!;
     if (!briefs.has(r.id)) briefs.set(r.id, recipientBrief(r));
     return {

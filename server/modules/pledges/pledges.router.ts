@@ -17,11 +17,11 @@ export function pledgeRoutes(sequelize: Sequelize): RouteDef[] {
       ],
     },
     {
-      method: 'get', path: '/api/pledges', access: 'signed-in', summary: 'Pledges: your own, or everyone\'s for organisers',
+      method: 'get', path: '/api/pledges', access: 'signed-in', summary: 'One page of pledges (your own, or everyone\'s for staff), filtered, searched and sorted',
       handlers: [
         validate({ query: PledgeListQuerySchema }),
         async (req, res) => {
-          res.json({ pledges: await listPledges(req.user!, req.query as unknown as PledgeListQuery) });
+          res.json(await listPledges(req.user!, req.query as unknown as PledgeListQuery));
         },
       ],
     },

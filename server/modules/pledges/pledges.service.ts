@@ -1,4 +1,4 @@
-import { Op, type Transaction } from 'sequelize';
+import { Op, col, fn, literal, where as sqlWhere, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import { Pledge } from '../../db/models/pledge';
 import { Need } from '../../db/models/need';
 import { Recipient } from '../../db/models/recipient';
@@ -10,11 +10,14 @@ import {
   isPledgeLate,
   type PledgeCreate,
   type PledgeListQuery,
+  type PledgeSort,
   type PledgeUpdate,
   type PledgeView,
 } from '@shared/schemas/pledge';
 import type { BlanketStatus, SizeCategory } from '@shared/schemas/blanket';
 import { recipientBrief, todayIso, addDaysIso } from './recipient-brief';
+import { FINISHED_STATUSES } from '@shared/blankets/status';
+import type { Page } from '@shared/schemas/page';
 
 export interface Actor {
   id: number;
@@ -27,7 +30,7 @@ export const readsAll = (actor: Actor) => actor.role !== 'volunteer';
 const fieldError = (status: number, path: string, message: string) => new HttpError(status, message, [{ path, message }]);
 
 /** A blanket counts as finished once it has left the hook, unless intake turned it away. */
-const countsAsFinished = (s: BlanketStatus) => s !== 'in_progress' && s !== 'declined';
+const countsAsFinished = (s: BlanketStatus) => FINISHED_STATUSES.includes(s);
 
 interface BlanketCounts {
   logged: number;
@@ -97,13 +100,43 @@ export async function pledgeView(id: number, transaction?: Transaction): Promise
   return (await views([p], transaction))[0]!;
 }
 
-export async function listPledges(actor: Actor, q: PledgeListQuery): Promise<PledgeView[]> {
-  const where: Record<string, unknown> = {};
+const pledgeStatusRank = literal("CASE `Pledge`.`status` WHEN 'active' THEN 0 WHEN 'fulfilled' THEN 1 ELSE 2 END");
+
+function pledgeOrder(sort: PledgeSort, dir: 'ASC' | 'DESC'): Order {
+  // The id breaks ties, so a row never shows on two pages.
+  switch (sort) {
+    case 'dueDate':
+      return [['dueDate', dir], ['id', dir]];
+    case 'createdAt':
+      return [['createdAt', dir], ['id', dir]];
+    case 'quantity':
+      return [['quantity', dir], ['id', 'ASC']];
+    case 'status':
+      return [[pledgeStatusRank, dir], ['dueDate', 'ASC'], ['id', 'ASC']];
+    case 'maker':
+      return [[{ model: User, as: 'user' }, 'name', dir], ['id', 'ASC']];
+  }
+}
+
+/** One page of pledges: your own, or everyone's for staff; filtered, searched and sorted here. */
+export async function listPledges(actor: Actor, q: PledgeListQuery): Promise<Page<PledgeView>> {
+  const where: WhereOptions = {};
   if (!readsAll(actor) || q.mine) where.userId = actor.id;
   if (q.status) where.status = q.status;
   if (q.needId) where.needId = q.needId;
-  const pledges = await Pledge.findAll({ where, ...include(), order: [['dueDate', 'ASC'], ['id', 'ASC']] });
-  return views(pledges);
+  if (q.q) {
+    (where as Record<symbol, unknown>)[Op.and] = [sqlWhere(fn('instr', fn('lower', col('user.name')), q.q.toLowerCase()), Op.gt, 0)];
+  }
+  const dir = (q.dir ?? (q.sort === 'createdAt' ? 'desc' : 'asc')).toUpperCase() as 'ASC' | 'DESC';
+  const total = await Pledge.count({ where, include: q.q ? [{ model: User, as: 'user', attributes: [] }] : [] });
+  const pledges = await Pledge.findAll({
+    where,
+    ...include(),
+    order: pledgeOrder(q.sort, dir),
+    limit: q.pageSize,
+    offset: (q.page - 1) * q.pageSize,
+  });
+  return { items: await views(pledges), total, page: q.page, pageSize: q.pageSize };
 }
 
 /** The pledge if this person may see it; someone else's is "not found" to a volunteer, never "forbidden". */

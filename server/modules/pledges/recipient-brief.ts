@@ -8,7 +8,24 @@ import { storedGuidelines } from '../recipients/recipients.service';
 /** A recipient's stored guideline set, read the way the recipients area reads it (defaults when it no longer parses). */
 export const guidelinesOf = storedGuidelines;
 
+/**
+ * Briefs already built, keyed by the recipient's id, version and last change: parsing and
+ * describing a guideline set per row of a list is most of a list's cost, and the recipients are few.
+ */
+const briefs = new Map<string, RecipientBrief>();
+const MAX_BRIEFS = 500;
+
 export function recipientBrief(r: Recipient): RecipientBrief {
+  const key = `${r.id}:${r.version}:${new Date(r.updatedAt).getTime()}`;
+  const known = briefs.get(key);
+  if (known) return known;
+  const brief = buildBrief(r);
+  if (briefs.size >= MAX_BRIEFS) briefs.clear();
+  briefs.set(key, brief);
+  return brief;
+}
+
+function buildBrief(r: Recipient): RecipientBrief {
   const guidelines = guidelinesOf(r);
   return {
     id: r.id,

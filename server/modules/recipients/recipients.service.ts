@@ -1,7 +1,8 @@
-import { Op, type Sequelize, type Transaction } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import { Recipient } from '../../db/models/recipient';
 import { Need } from '../../db/models/need';
-import { Pledge } from '../../db/models/pledge';
+import { needCounts, noCounts } from '../pledges/need-counts';
+import type { NeedCounts } from '@shared/schemas/pledge';
 import { HttpError, notFound } from '../../lib/http-error';
 import { defaultGuidelines } from '@shared/guidelines/defaults';
 import { describeGuidelines } from '@shared/guidelines/describe';
@@ -28,35 +29,44 @@ export function storedGuidelines(r: Pick<Recipient, 'guidelines' | 'population'>
   return parsed.success ? parsed.data : defaultGuidelines(r.population);
 }
 
-async function pledgedByNeed(needIds: number[], transaction?: Transaction): Promise<Map<number, number>> {
-  const out = new Map<number, number>();
-  if (needIds.length === 0) return out;
-  const rows = (await Pledge.findAll({
-    attributes: ['needId', [Pledge.sequelize!.fn('SUM', Pledge.sequelize!.col('quantity')), 'total']],
-    where: { needId: { [Op.in]: needIds }, status: 'active' },
-    group: ['needId'],
-    raw: true,
-    transaction,
-  })) as unknown as Array<{ needId: number; total: number }>;
-  for (const row of rows) out.set(row.needId, Number(row.total));
-  return out;
-}
+type CountsByNeed = Map<number, NeedCounts>;
 
-function needView(n: Need, pledged: Map<number, number>): NeedView {
-  return {
+/** Volunteers see what is pledged; where the blankets stand is for the people who handle them. */
+function needView(n: Need, counts: CountsByNeed, withBlankets: boolean): NeedView {
+  const c = counts.get(n.id) ?? noCounts(n.id, n.recipientId, n.quantity);
+  const view: NeedView = {
     id: n.id,
     recipientId: n.recipientId,
     sizeCategory: n.sizeCategory,
     quantity: n.quantity,
     deadline: n.deadline,
     preferences: n.preferences ?? null,
-    pledged: pledged.get(n.id) ?? 0,
+    pledged: c.pledged,
     version: n.version,
   };
+  if (withBlankets) Object.assign(view, { finished: c.finished, inHand: c.inHand, assigned: c.assigned });
+  return view;
 }
 
-function recipientView(r: Recipient, role: Role, pledged: Map<number, number>): RecipientView {
-  const guidelines = storedGuidelines(r);
+/**
+ * A recipient's guidelines read back and described, kept per id, version and last change: reading
+ * them through the schema on every list was most of what a list of recipients cost.
+ */
+const readGuidelines = new Map<string, { guidelines: GuidelineSet; summary: string[] }>();
+function guidelinesAndSummary(r: Recipient) {
+  const key = `${r.id}:${r.version}:${new Date(r.updatedAt).getTime()}`;
+  let known = readGuidelines.get(key);
+  if (!known) {
+    const guidelines = storedGuidelines(r);
+    known = { guidelines, summary: describeGuidelines(guidelines) };
+    if (readGuidelines.size >= 500) readGuidelines.clear();
+    readGuidelines.set(key, known);
+  }
+  return known;
+}
+
+function recipientView(r: Recipient, role: Role, counts: CountsByNeed): RecipientView {
+  const { guidelines, summary } = guidelinesAndSummary(r);
   const needs = [...(r.needs ?? [])].sort((a, b) => a.deadline.localeCompare(b.deadline) || a.id - b.id);
   const view: RecipientView = {
     id: r.id,
@@ -69,8 +79,8 @@ function recipientView(r: Recipient, role: Role, pledged: Map<number, number>): 
     active: r.active,
     version: r.version,
     guidelines,
-    guidelineSummary: describeGuidelines(guidelines),
-    needs: needs.map((n) => needView(n, pledged)),
+    guidelineSummary: summary,
+    needs: needs.map((n) => needView(n, counts, seesContacts(role))),
   };
   if (seesContacts(role)) {
     view.contactName = r.contactName ?? null;
@@ -86,8 +96,8 @@ export async function listRecipients(role: Role, active: 'true' | 'false' | 'all
   const filter = role === 'volunteer' ? 'true' : active;
   const where = filter === 'all' ? {} : { active: filter === 'true' };
   const rows = await Recipient.findAll({ where, include: [{ model: Need, as: 'needs' }], order: [['name', 'ASC']] });
-  const pledged = await pledgedByNeed(rows.flatMap((r) => (r.needs ?? []).map((n) => n.id)));
-  return rows.map((r) => recipientView(r, role, pledged));
+  const counts = await needCounts(rows.flatMap((r) => (r.needs ?? []).map((n) => n.id)), { blankets: seesContacts(role) });
+  return rows.map((r) => recipientView(r, role, counts));
 }
 
 async function loadRecipient(id: number, transaction?: Transaction): Promise<Recipient> {
@@ -99,8 +109,8 @@ async function loadRecipient(id: number, transaction?: Transaction): Promise<Rec
 export async function getRecipient(id: number, role: Role): Promise<RecipientView> {
   const r = await loadRecipient(id);
   if (role === 'volunteer' && !r.active) throw notFound('That recipient');
-  const pledged = await pledgedByNeed((r.needs ?? []).map((n) => n.id));
-  return recipientView(r, role, pledged);
+  const counts = await needCounts((r.needs ?? []).map((n) => n.id), { blankets: seesContacts(role) });
+  return recipientView(r, role, counts);
 }
 
 function checkVersion(current: number, sent: number | undefined, what: string) {
@@ -186,7 +196,7 @@ export async function createNeed(recipientId: number, input: NeedCreate): Promis
     deadline: input.deadline,
     preferences: input.preferences ?? null,
   });
-  return needView(need, new Map());
+  return needView(need, new Map(), true);
 }
 
 export async function updateNeed(recipientId: number, needId: number, input: NeedUpdate): Promise<NeedView> {
@@ -197,12 +207,12 @@ export async function updateNeed(recipientId: number, needId: number, input: Nee
   if (input.deadline !== undefined) need.deadline = input.deadline;
   if (input.preferences !== undefined) need.preferences = input.preferences;
   await need.save();
-  return needView(need, await pledgedByNeed([need.id]));
+  return needView(need, await needCounts([need.id]), true);
 }
 
 export async function deleteNeed(recipientId: number, needId: number): Promise<void> {
   const need = await loadNeed(recipientId, needId);
-  const pledged = (await pledgedByNeed([need.id])).get(need.id) ?? 0;
+  const pledged = (await needCounts([need.id], { blankets: false })).get(need.id)?.pledged ?? 0;
   if (pledged > 0) {
     // Deleting would quietly turn volunteers' pledges into "wherever it's needed most".
     throw new HttpError(

@@ -7,10 +7,9 @@ import { ProgressBar } from '@/components/ui/progress-bar';
 import { navItems } from '@/components/layout/nav-items';
 import { useMe } from '@/features/auth/api/get-me';
 import { useDrive } from '@/features/drive/api/get-drive';
-import { useNeeds } from '@/features/needs/api/get-needs';
-import { useAllBlankets } from '@/features/blankets/api/get-all-blankets';
+import { useDriveProgress } from '@/features/drive/api/get-drive-progress';
 import { Loading } from '@/components/ui/spinner';
-import { IN_HAND } from '@/features/progress/components/progress-data';
+import { IN_HAND } from '@shared/blankets/status';
 import { Badge } from '@/components/ui/badge';
 import { useMyPledges } from '@/features/pledges/api/get-pledges';
 import { useMyBlankets } from '@/features/blankets/api/get-blankets';
@@ -24,7 +23,7 @@ function MyPart() {
   const active = pledges.data.filter((p) => p.status !== 'cancelled');
   const promised = active.reduce((n, p) => n + p.quantity, 0);
   const finished = active.reduce((n, p) => n + p.blanketsFinished, 0);
-  const handedIn = blankets.data.filter((b) => IN_HAND.includes(b.status)).length;
+  const handedIn = blankets.data.items.filter((b) => IN_HAND.includes(b.status)).length;
   const late = active.filter((p) => p.late).length;
   const next = active
     .filter((p) => p.status === 'active' && p.blanketsFinished < p.quantity)
@@ -57,16 +56,15 @@ function MyPart() {
 const ProgressCharts = lazy(() => import('@/features/progress/components/progress-charts').then((m) => ({ default: m.ProgressCharts })));
 
 function DriveProgress() {
-  const needs = useNeeds();
-  const blankets = useAllBlankets();
-  if (!needs.data || !blankets.data) return <Loading label="Gathering the drive’s figures…" />;
+  const progress = useDriveProgress();
+  if (!progress.data) return <Loading label="Gathering the drive’s figures…" />;
   return (
     <section aria-labelledby="progress">
       <h2 id="progress" className="mb-3 text-2xl font-bold">
         How the drive is going
       </h2>
       <Suspense fallback={<Loading label="Drawing the charts…" />}>
-        <ProgressCharts needs={needs.data} blankets={blankets.data} />
+        <ProgressCharts progress={progress.data} />
       </Suspense>
     </section>
   );

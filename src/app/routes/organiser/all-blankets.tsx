@@ -1,15 +1,11 @@
 import { Layers, ScanLine } from 'lucide-react';
 import { PageHeader } from '@/components/ui/page-header';
 import { ButtonLink } from '@/components/ui/button';
-import { Loading } from '@/components/ui/spinner';
-import { QueryError } from '@/components/ui/query-error';
 import { EmptyState } from '@/components/ui/empty-state';
-import { useAllBlankets } from '@/features/blankets/api/get-all-blankets';
 import { BlanketsTable } from '@/features/blankets/components/blankets-table';
 
 /** Every blanket of the drive, for the organisers and the coordinator: find one, see where it is up to. */
 export default function AllBlanketsPage() {
-  const blankets = useAllBlankets();
   return (
     <div className="space-y-6">
       <PageHeader
@@ -21,16 +17,15 @@ export default function AllBlanketsPage() {
           </ButtonLink>
         }
       />
-      {blankets.isPending && <Loading />}
-      {blankets.error && <QueryError error={blankets.error} />}
-      {blankets.data &&
-        (blankets.data.length === 0 ? (
+      <BlanketsTable
+        mine={false}
+        showMaker
+        empty={
           <EmptyState icon={Layers} title="No blankets logged yet">
             Blankets appear here as soon as makers log them, long before they reach a drop-off point.
           </EmptyState>
-        ) : (
-          <BlanketsTable blankets={blankets.data} showMaker />
-        ))}
+        }
+      />
     </div>
   );
 }

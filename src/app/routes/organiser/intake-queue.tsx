@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { Inbox, Printer, ScanLine } from 'lucide-react';
+import { ChevronLeft, ChevronRight, Inbox, Printer, ScanLine } from 'lucide-react';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardTitle } from '@/components/ui/card';
-import { ButtonLink } from '@/components/ui/button';
+import { Button, ButtonLink } from '@/components/ui/button';
 import { Field, Input, Select } from '@/components/ui/field';
 import { Loading } from '@/components/ui/spinner';
 import { QueryError } from '@/components/ui/query-error';
@@ -15,15 +15,24 @@ import { rememberedSiteId } from '@/features/intake/components/receive-panel';
 import { StatusBadge, categoryText } from '@/features/intake/components/blanket-summary';
 import { formatCm } from '@shared/guidelines/wording';
 import type { IntakeQueueItem } from '@shared/schemas/intake';
+import { pageCount } from '@shared/schemas/page';
 
 const localDay = (d = new Date()) => `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
 const time = (iso: string | null) => (iso ? new Date(iso).toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' }) : '');
 
-function List({ title, items, empty, selected, onSelect }: { title: string; items: IntakeQueueItem[]; empty: string; selected: Set<number>; onSelect: (id: number, on: boolean) => void }) {
+interface Paging {
+  total: number;
+  page: number;
+  pageSize: number;
+  onPage: (page: number) => void;
+}
+
+function List({ title, items, empty, selected, onSelect, paging }: { title: string; items: IntakeQueueItem[]; empty: string; selected: Set<number>; onSelect: (id: number, on: boolean) => void; paging?: Paging }) {
+  const pages = paging ? pageCount(paging) : 1;
   return (
     <Card>
       <CardTitle>
-        {title} <span className="font-normal text-ink-soft">({items.length})</span>
+        {title} <span className="font-normal text-ink-soft">({paging ? paging.total : items.length})</span>
       </CardTitle>
       {items.length === 0 ? (
         <p className="text-ink-soft">{empty}</p>
@@ -45,6 +54,19 @@ function List({ title, items, empty, selected, onSelect }: { title: string; item
           ))}
         </ul>
       )}
+      {paging && pages > 1 && (
+        <nav aria-label={`Pages of ${title.toLowerCase()}`} className="mt-3 flex flex-wrap items-center justify-between gap-3">
+          <Button size="sm" variant="secondary" onClick={() => paging.onPage(paging.page - 1)} disabled={paging.page <= 1}>
+            <ChevronLeft className="size-4" aria-hidden /> Previous
+          </Button>
+          <span>
+            Page {paging.page} of {pages}
+          </span>
+          <Button size="sm" variant="secondary" onClick={() => paging.onPage(paging.page + 1)} disabled={paging.page >= pages}>
+            Next <ChevronRight className="size-4" aria-hidden />
+          </Button>
+        </nav>
+      )}
     </Card>
   );
 }
@@ -54,7 +76,11 @@ export default function IntakeQueuePage() {
   const sites = useIntakeSites();
   const siteId = Number(params.get('siteId')) || rememberedSiteId() || sites.data?.[0]?.id || null;
   const date = params.get('date') ?? localDay();
-  const queue = useIntakeQueue(siteId, date);
+  const [pages, setPages] = useState({ waitingPage: 1, expectedPage: 1, key: '' });
+  // Another site or day starts both lists from their first page again.
+  const here = `${siteId}:${date}`;
+  const current = pages.key === here ? pages : { waitingPage: 1, expectedPage: 1, key: here };
+  const queue = useIntakeQueue(siteId, date, { waitingPage: current.waitingPage, expectedPage: current.expectedPage });
   const [selected, setSelected] = useState<Set<number>>(new Set());
   const onSelect = (id: number, on: boolean) =>
     setSelected((s) => {
@@ -108,10 +134,24 @@ export default function IntakeQueuePage() {
         </EmptyState>
       ) : (
         <div className="grid gap-6 lg:grid-cols-2">
-          <List title="Waiting for inspection" items={queue.data.waiting} empty="Nothing waiting. Well done." selected={selected} onSelect={onSelect} />
+          <List
+            title="Waiting for inspection"
+            items={queue.data.waiting}
+            empty="Nothing waiting. Well done."
+            selected={selected}
+            onSelect={onSelect}
+            paging={{ total: queue.data.waitingTotal, page: queue.data.waitingPage, pageSize: queue.data.pageSize, onPage: (p) => setPages({ ...current, waitingPage: p }) }}
+          />
           <List title="Arrived this day" items={queue.data.arrived} empty="Nothing received here on this day yet." selected={selected} onSelect={onSelect} />
           <List title="Inspected this day" items={queue.data.inspected} empty="Nothing inspected here on this day yet." selected={selected} onSelect={onSelect} />
-          <List title="Booked to come here" items={queue.data.expected} empty="No drop-offs booked for this site." selected={selected} onSelect={onSelect} />
+          <List
+            title="Booked to come here"
+            items={queue.data.expected}
+            empty="No drop-offs booked for this site."
+            selected={selected}
+            onSelect={onSelect}
+            paging={{ total: queue.data.expectedTotal, page: queue.data.expectedPage, pageSize: queue.data.pageSize, onPage: (p) => setPages({ ...current, expectedPage: p }) }}
+          />
         </div>
       )}
     </div>

@@ -1,31 +1,21 @@
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import {
-  createColumnHelper,
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getPaginationRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type SortingState,
-} from '@tanstack/react-table';
+import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type PaginationState, type SortingState } from '@tanstack/react-table';
 import { ArrowDown, ArrowUp, ArrowUpDown, ChevronLeft, ChevronRight, ImageIcon, Search } from 'lucide-react';
 import { Button } from '@/components/ui/button';
 import { Field, Input, Select } from '@/components/ui/field';
 import { formatDay } from '@/components/ui/format-day';
 import { cn } from '@/components/ui/cn';
-import { BLANKET_STATUSES, type BlanketStatus } from '@shared/schemas/blanket';
-import type { BlanketSummary } from '@shared/schemas/blanket-log';
+import type { BlanketStatus } from '@shared/schemas/blanket';
+import type { BlanketSort, BlanketSummary } from '@shared/schemas/blanket-log';
+import { pageCount } from '@shared/schemas/page';
+import { Loading } from '@/components/ui/spinner';
+import { QueryError } from '@/components/ui/query-error';
+import { useBlankets } from '../api/get-blankets';
 import { STATUS_LABELS } from '@shared/blankets/status';
 import { formatCm } from '@shared/guidelines/wording';
 import { StatusBadge } from './status-badge';
 import { StatusTimeline } from './status-timeline';
-
-/** Sorting by status follows the blanket's life, not the alphabet. */
-const STATUS_RANK: Record<BlanketStatus, number> = Object.fromEntries(
-  (['in_progress', 'finished', 'booked', 'received', 'needs_fix', 'declined', 'checked', 'assigned', 'packed', 'delivered'] as BlanketStatus[]).map((s, i) => [s, i]),
-) as Record<BlanketStatus, number>;
 
 const col = createColumnHelper<BlanketSummary>();
 const size = (b: BlanketSummary) => `${formatCm(b.widthCm)} × ${formatCm(b.lengthCm)} cm`;
@@ -43,8 +33,6 @@ const columns = [
   }),
   col.accessor('status', {
     header: 'Status',
-    sortingFn: (a, b) => STATUS_RANK[a.original.status] - STATUS_RANK[b.original.status],
-    filterFn: 'equals',
     cell: (c) => (
       <div className="space-y-1">
         <StatusBadge status={c.getValue()} />
@@ -58,7 +46,7 @@ const columns = [
   col.accessor('createdAt', { header: 'Logged', cell: (c) => <span className="whitespace-nowrap">{formatDay(c.getValue())}</span> }),
   col.accessor('photoCount', {
     header: 'Photos',
-    enableGlobalFilter: false,
+    enableSorting: false,
     cell: (c) =>
       c.row.original.coverPhoto ? (
         <img src={c.row.original.coverPhoto.thumbUrl} alt="" className="size-12 rounded-lg object-cover" loading="lazy" />
@@ -100,34 +88,75 @@ function BlanketCard({ b }: { b: BlanketSummary }) {
 
 const PAGE_SIZES = [10, 25, 50];
 
+/** The column ids the server knows how to sort by. */
+const SORTABLE: Record<string, BlanketSort> = {
+  code: 'code',
+  status: 'status',
+  recipient: 'recipient',
+  size: 'size',
+  colours: 'colours',
+  createdAt: 'createdAt',
+  makerName: 'maker',
+};
+
+/** A value that follows `value` once it has stood still for `ms`, so typing doesn't fire a request per key. */
+function useSettled<T>(value: T, ms = 300): T {
+  const [settled, setSettled] = useState(value);
+  useEffect(() => {
+    const t = setTimeout(() => setSettled(value), ms);
+    return () => clearTimeout(t);
+  }, [value, ms]);
+  return settled;
+}
+
 /**
- * "My blankets": sortable, filterable and paged. A table on wide screens, cards on phones, both
- * drawn from the same rows so a filter or a page applies to whichever you see.
+ * A list of blankets, sorted, filtered, searched and paged by the server (TanStack Table in manual
+ * mode): a maker's own (`mine`) or, for staff, the whole drive's. A table on wide screens, cards on
+ * phones, both drawn from the same page of rows.
  */
-export function BlanketsTable({ blankets, showMaker = false }: { blankets: BlanketSummary[]; showMaker?: boolean }) {
+export function BlanketsTable({ mine, showMaker = false, empty }: { mine: boolean; showMaker?: boolean; empty: ReactNode }) {
   // Staff see everyone's blankets, so who made each one is a column of its own.
   const visibleColumns = useMemo(() => (showMaker ? [columns[0]!, makerColumn, ...columns.slice(1)] : columns), [showMaker]);
   const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);
-  const [globalFilter, setGlobalFilter] = useState('');
+  const [search, setSearch] = useState('');
   const [status, setStatus] = useState<BlanketStatus | ''>('');
-  const columnFilters = useMemo(() => (status ? [{ id: 'status', value: status }] : []), [status]);
-  const table = useReactTable({
-    data: blankets,
-    columns: visibleColumns,
-    state: { sorting, globalFilter, columnFilters },
-    onSortingChange: setSorting,
-    onGlobalFilterChange: setGlobalFilter,
-    globalFilterFn: 'includesString',
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    getPaginationRowModel: getPaginationRowModel(),
-    initialState: { pagination: { pageSize: 10 } },
+  const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize: 10 });
+  const q = useSettled(search.trim());
+  const sort = sorting[0];
+  const query = useBlankets({
+    mine: mine || undefined,
+    status: status || undefined,
+    q: q || undefined,
+    sort: sort ? SORTABLE[sort.id] : undefined,
+    dir: sort ? (sort.desc ? 'desc' : 'asc') : undefined,
+    page: pagination.pageIndex + 1,
+    pageSize: pagination.pageSize,
   });
+  const page = query.data;
+  const total = page?.total ?? 0;
+  const table = useReactTable({
+    data: page?.items ?? [],
+    columns: visibleColumns,
+    state: { sorting, pagination },
+    manualSorting: true,
+    manualFiltering: true,
+    manualPagination: true,
+    rowCount: total,
+    onSortingChange: (u) => {
+      setSorting(u);
+      setPagination((p) => ({ ...p, pageIndex: 0 }));
+    },
+    onPaginationChange: setPagination,
+    getCoreRowModel: getCoreRowModel(),
+  });
+  // A new search or filter starts again from the first page.
+  useEffect(() => setPagination((p) => ({ ...p, pageIndex: 0 })), [q, status]);
+
+  if (query.isPending) return <Loading />;
+  if (query.error && !page) return <QueryError error={query.error} />;
+  const filtered = q !== '' || status !== '';
+  if (!filtered && total === 0) return <>{empty}</>;
   const rows = table.getRowModel().rows;
-  const shown = table.getFilteredRowModel().rows.length;
-  const present = new Set(blankets.map((b) => b.status));
-  const statuses = BLANKET_STATUSES.filter((s) => present.has(s));
 
   return (
     <div className="space-y-4">
@@ -136,7 +165,7 @@ export function BlanketsTable({ blankets, showMaker = false }: { blankets: Blank
           {({ id }) => (
             <div className="relative">
               <Search className="pointer-events-none absolute left-3 top-1/2 size-5 -translate-y-1/2 text-ink-soft" aria-hidden />
-              <Input id={id} type="search" placeholder="Code, recipient or colour" value={globalFilter} onChange={(e) => setGlobalFilter(e.target.value)} className="pl-10" />
+              <Input id={id} type="search" placeholder={showMaker ? 'Code, recipient, colour or maker' : 'Code, recipient or colour'} value={search} onChange={(e) => setSearch(e.target.value)} className="pl-10" />
             </div>
           )}
         </Field>
@@ -144,7 +173,7 @@ export function BlanketsTable({ blankets, showMaker = false }: { blankets: Blank
           {({ id }) => (
             <Select id={id} value={status} onChange={(e) => setStatus(e.target.value as BlanketStatus | '')}>
               <option value="">All</option>
-              {statuses.map((s) => (
+              {(Object.keys(STATUS_LABELS) as BlanketStatus[]).map((s) => (
                 <option key={s} value={s}>
                   {STATUS_LABELS[s]}
                 </option>
@@ -154,10 +183,11 @@ export function BlanketsTable({ blankets, showMaker = false }: { blankets: Blank
         </Field>
       </div>
       <p className="text-ink-soft" aria-live="polite">
-        {shown === blankets.length ? `${blankets.length} blanket${blankets.length === 1 ? '' : 's'}` : `${shown} of ${blankets.length} blankets`}
+        {filtered ? `${total} matching blanket${total === 1 ? '' : 's'}` : `${total} blanket${total === 1 ? '' : 's'}`}
+        {query.isFetching && <span className="sr-only"> (updating)</span>}
       </p>
 
-      <div className="hidden overflow-x-auto rounded-2xl border border-oat-200 bg-white md:block">
+      <div className={cn('hidden overflow-x-auto rounded-2xl border border-oat-200 bg-white md:block', query.isPlaceholderData && 'opacity-70')}>
         <table className="w-full text-left">
           <thead className="border-b border-oat-200 bg-oat-50">
             {table.getHeaderGroups().map((hg) => (
@@ -201,19 +231,19 @@ export function BlanketsTable({ blankets, showMaker = false }: { blankets: Blank
         ))}
       </ul>
 
-      {shown === 0 && <p className="py-6 text-center text-ink-soft">No blankets match. Clear the search or choose another status.</p>}
+      {total === 0 && <p className="py-6 text-center text-ink-soft">No blankets match. Clear the search or choose another status.</p>}
 
-      {shown > PAGE_SIZES[0]! && (
+      {total > PAGE_SIZES[0]! && (
         <nav aria-label="Pages" className="flex flex-wrap items-center justify-between gap-3">
           <Button variant="secondary" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
             <ChevronLeft className="size-5" aria-hidden /> Previous
           </Button>
           <span>
-            Page {table.getState().pagination.pageIndex + 1} of {table.getPageCount()}
+            Page {pagination.pageIndex + 1} of {pageCount({ total, pageSize: pagination.pageSize })}
           </span>
           <label className="flex items-center gap-2">
             Per page
-            <Select value={table.getState().pagination.pageSize} onChange={(e) => table.setPageSize(Number(e.target.value))} className="w-auto">
+            <Select value={pagination.pageSize} onChange={(e) => table.setPageSize(Number(e.target.value))} className="w-auto">
               {PAGE_SIZES.map((n) => (
                 <option key={n} value={n}>
                   {n}

@@ -1,5 +1,8 @@
+import type { PledgeListParams } from './get-pledges';
+
 export const pledgeKeys = {
   all: ['pledges'] as const,
-  list: (filter: { mine?: boolean } = {}) => [...pledgeKeys.all, 'list', filter] as const,
+  lists: () => [...pledgeKeys.all, 'list'] as const,
+  list: (params: PledgeListParams) => [...pledgeKeys.lists(), params] as const,
   detail: (id: number) => [...pledgeKeys.all, 'detail', id] as const,
 };

@@ -2,12 +2,14 @@ import { Bar, BarChart, CartesianGrid, Cell, Legend, ResponsiveContainer, Toolti
 import { BarChart3 } from 'lucide-react';
 import { Card, CardTitle } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
-import { recipientProgress, statusCounts, type BlanketLike, type NeedLike } from './progress-data';
+import type { DriveProgress } from '@shared/schemas/pledge';
+import { recipientProgress, statusCounts } from './progress-data';
 
 const COLOURS = {
   wanted: 'var(--color-sky-700)',
   pledged: 'var(--color-heather-500)',
   inHand: 'var(--color-moss-500)',
+  assigned: 'var(--color-marigold-700)',
   status: 'var(--color-heather-700)',
   attention: 'var(--color-marigold-400)',
   declined: 'var(--color-brick-500)',
@@ -16,10 +18,11 @@ const COLOURS = {
 const axis = { fontSize: 14, fill: 'var(--color-ink)' };
 
 /** Charts of the drive for organisers and the coordinator, each with the same figures as a table for screen readers. */
-export function ProgressCharts({ needs, blankets }: { needs: NeedLike[]; blankets: BlanketLike[] }) {
-  const perRecipient = recipientProgress(needs, blankets);
-  const perStatus = statusCounts(blankets);
-  if (perRecipient.length === 0 && blankets.length === 0) {
+export function ProgressCharts({ progress }: { progress: DriveProgress }) {
+  const perRecipient = recipientProgress(progress.recipients);
+  const perStatus = statusCounts(progress.statuses);
+  const blanketCount = perStatus.reduce((n, s) => n + s.count, 0);
+  if (perRecipient.length === 0 && blanketCount === 0) {
     return (
       <EmptyState icon={BarChart3} title="Nothing to chart yet">
         Once recipients have needs and makers start pledging, the drive's progress shows here.
@@ -30,8 +33,8 @@ export function ProgressCharts({ needs, blankets }: { needs: NeedLike[]; blanket
     <div className="grid gap-6 lg:grid-cols-2">
       {/* min-w-0: a grid item would otherwise grow to the chart's width and push the page sideways on a phone. */}
       <Card className="min-w-0">
-        <CardTitle>Wanted, pledged and in hand</CardTitle>
-        <p className="mb-3 text-ink-soft">Per recipient: blankets asked for, promised by makers, and already with the organisers.</p>
+        <CardTitle>Wanted, pledged, in hand and assigned</CardTitle>
+        <p className="mb-3 text-ink-soft">Per recipient: blankets asked for, promised by makers, with the organisers now, and assigned to it.</p>
         <div aria-hidden className="h-80" data-testid="chart-recipients">
           <ResponsiveContainer width="100%" height="100%">
             <BarChart accessibilityLayer={false} data={perRecipient} layout="vertical" margin={{ left: 8, right: 16 }}>
@@ -43,19 +46,21 @@ export function ProgressCharts({ needs, blankets }: { needs: NeedLike[]; blanket
               <Bar dataKey="wanted" name="Wanted" fill={COLOURS.wanted} isAnimationActive={false} />
               <Bar dataKey="pledged" name="Pledged" fill={COLOURS.pledged} isAnimationActive={false} />
               <Bar dataKey="inHand" name="In hand" fill={COLOURS.inHand} isAnimationActive={false} />
+              <Bar dataKey="assigned" name="Assigned" fill={COLOURS.assigned} isAnimationActive={false} />
             </BarChart>
           </ResponsiveContainer>
         </div>
         {/* The wrapper hides it: a table ignores the 1px width sr-only gives it and would widen the page. */}
         <div className="sr-only">
         <table>
-          <caption>Wanted, pledged and in hand per recipient</caption>
+          <caption>Wanted, pledged, in hand and assigned per recipient</caption>
           <thead>
             <tr>
               <th>Recipient</th>
               <th>Wanted</th>
               <th>Pledged</th>
               <th>In hand</th>
+              <th>Assigned</th>
             </tr>
           </thead>
           <tbody>
@@ -65,6 +70,7 @@ export function ProgressCharts({ needs, blankets }: { needs: NeedLike[]; blanket
                 <td>{r.wanted}</td>
                 <td>{r.pledged}</td>
                 <td>{r.inHand}</td>
+                <td>{r.assigned}</td>
               </tr>
             ))}
           </tbody>

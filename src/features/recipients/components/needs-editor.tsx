@@ -125,7 +125,10 @@ export function NeedsEditor({ recipientId, needs }: { recipientId: number; needs
                   </Button>
                 </div>
               </div>
-              <ProgressBar className="mt-3" value={n.quantity === 0 ? 0 : n.pledged / n.quantity} label={`${n.pledged} of ${n.quantity} pledged`} tone={n.pledged >= n.quantity ? 'moss' : 'heather'} />
+              <ProgressBar className="mt-3" value={n.quantity === 0 ? 0 : n.pledged / n.quantity} label={`Pledged ${n.pledged} of ${n.quantity}`} tone={n.pledged >= n.quantity ? 'moss' : 'heather'} />
+              <p className="mt-1 text-sm text-ink-soft" data-testid="need-figures">
+                {n.finished ?? 0} finished · {n.inHand ?? 0} with the organisers · {n.assigned ?? 0} assigned
+              </p>
             </li>
           ),
         )}

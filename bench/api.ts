@@ -1,0 +1,218 @@
+/**
+ * The API under load, beside bare Express answering the same bytes in the same run.
+ *
+ *   npm run bench:api -- [--db bench/data/demo-20k.sqlite] [--duration 10] [--connections 50] [--no-write]
+ *
+ * Grows the demo to 20,000 blankets first when the database is missing (bench/grow-demo.ts), starts
+ * Kindloop on a copy of it (port 3411) and the bare baseline (port 3413), signs in as the demo
+ * volunteer and organiser, and runs autocannon against each route and then its baseline. Prints
+ * req/s, p50, p99 and bytes with the ratio to the baseline, the server's start time and its largest
+ * RSS during the run, and writes them into bench/README.md between the api-bench markers.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import http from 'node:http';
+import os from 'node:os';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import autocannon from 'autocannon';
+import { BENCH_PASSWORD, growDemo } from './grow-demo';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const arg = (name: string, fallback: string) => {
+  const i = process.argv.indexOf(`--${name}`);
+  return i >= 0 && process.argv[i + 1] ? process.argv[i + 1]! : fallback;
+};
+const DB = path.resolve(root, arg('db', 'bench/data/demo-20k.sqlite'));
+const DURATION = Number(arg('duration', '10'));
+const CONNECTIONS = Number(arg('connections', '50'));
+const PORT = 3411;
+const MAIL_PORT = 3412;
+const BARE_PORT = 3413;
+
+interface Raw {
+  status: number;
+  headers: http.IncomingHttpHeaders;
+  body: Buffer;
+}
+
+function raw(port: number, url: string, opts: { method?: string; headers?: Record<string, string>; body?: string } = {}): Promise<Raw> {
+  return new Promise((resolve, reject) => {
+    const req = http.request({ host: '127.0.0.1', port, path: url, method: opts.method ?? 'GET', headers: opts.headers }, (res) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
+    });
+    req.on('error', reject);
+    if (opts.body) req.write(opts.body);
+    req.end();
+  });
+}
+
+async function waitFor(port: number, url: string, ms: number) {
+  const until = Date.now() + ms;
+  for (;;) {
+    try {
+      if ((await raw(port, url)).status === 200) return;
+    } catch {
+      /* not listening yet */
+    }
+    if (Date.now() > until) throw new Error(`Nothing answered on :${port}${url} within ${ms} ms`);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+}
+
+const cookieOf = (r: Raw) => (r.headers['set-cookie'] ?? []).map((c) => c.split(';')[0]).join('; ');
+
+async function signIn(email: string): Promise<string> {
+  const csrf = await raw(PORT, '/api/auth/csrf');
+  const cookie = cookieOf(csrf);
+  const token = (JSON.parse(csrf.body.toString()) as { csrfToken: string }).csrfToken;
+  const login = await raw(PORT, '/api/auth/login', {
+    method: 'POST',
+    headers: { cookie, 'x-csrf-token': token, 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password: BENCH_PASSWORD }),
+  });
+  if (login.status !== 200) throw new Error(`Sign-in as ${email} failed: ${login.status} ${login.body.toString()}`);
+  return cookieOf(login);
+}
+
+function rssOf(pid: number): number {
+  try {
+    const m = /VmRSS:\s+(\d+) kB/.exec(fs.readFileSync(`/proc/${pid}/status`, 'utf8'));
+    return m ? Number(m[1]) * 1024 : 0;
+  } catch {
+    return 0;
+  }
+}
+
+async function load(url: string, headers: Record<string, string>) {
+  const r = await autocannon({ url, connections: CONNECTIONS, duration: DURATION, headers });
+  return { rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.timeouts + r.non2xx };
+}
+
+function stop(child: ChildProcess | undefined) {
+  if (child?.pid && child.exitCode === null) child.kill('SIGTERM');
+}
+
+async function main() {
+  if (!fs.existsSync(DB)) {
+    console.log(`No ${path.relative(root, DB)} yet: growing the demo drive first…`);
+    await growDemo({ db: DB, blankets: 20_000, makers: 2_000 });
+  }
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'kindloop-bench-'));
+  const dbCopy = path.join(dir, 'bench.sqlite');
+  fs.copyFileSync(DB, dbCopy);
+
+  let server: ChildProcess | undefined;
+  let bare: ChildProcess | undefined;
+  const cleanUp = () => {
+    stop(server);
+    stop(bare);
+    fs.rmSync(dir, { recursive: true, force: true });
+  };
+  process.on('SIGINT', () => {
+    cleanUp();
+    process.exit(130);
+  });
+  try {
+    const started = Date.now();
+    server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+      cwd: root,
+      stdio: ['ignore', 'ignore', 'inherit'],
+      env: {
+        ...process.env,
+        NODE_ENV: 'production',
+        PORT: String(PORT),
+        HOST: '127.0.0.1',
+        DATABASE_PATH: dbCopy,
+        UPLOAD_DIR: path.join(dir, 'uploads'),
+        EXPORT_DIR: path.join(dir, 'exports'),
+        MAIL_CATCHER_PORT: String(MAIL_PORT),
+        SEED_DEMO: 'false',
+        // Plain HTTP on loopback: a Secure cookie would never be set.
+        COOKIE_SECURE: 'false',
+        SERVE_CLIENT: 'false',
+        SCRYPT_LOG_N: '12',
+        LOGIN_MAX_FAILURES: '1000',
+      },
+    });
+    await waitFor(PORT, '/api/health', 60_000);
+    const startSeconds = (Date.now() - started) / 1000;
+    let maxRss = rssOf(server.pid!);
+    const sampler = setInterval(() => (maxRss = Math.max(maxRss, rssOf(server!.pid!))), 200);
+
+    const volunteer = await signIn('volunteer@example.org');
+    const organiser = await signIn('organiser@example.org');
+    const sites = JSON.parse((await raw(PORT, '/api/sites', { headers: { cookie: organiser } })).body.toString()) as { sites: Array<{ id: number }> };
+    const today = new Date();
+    const day = `${today.getFullYear()}-${String(today.getMonth() + 1).padStart(2, '0')}-${String(today.getDate()).padStart(2, '0')}`;
+    const routes = [
+      { name: 'GET /api/blankets (volunteer)', url: '/api/blankets', cookie: volunteer },
+      { name: 'GET /api/needs (volunteer)', url: '/api/needs', cookie: volunteer },
+      { name: 'GET /api/recipients (volunteer)', url: '/api/recipients', cookie: volunteer },
+      { name: 'GET /api/intake/queue (organiser)', url: `/api/intake/queue?siteId=${sites.sites[0]!.id}&date=${day}`, cookie: organiser },
+      { name: 'GET /api/blankets (organiser, page 1)', url: '/api/blankets', cookie: organiser },
+      { name: 'GET /api/pledges (organiser, page 1)', url: '/api/pledges', cookie: organiser },
+      { name: 'GET /api/drive/progress (organiser)', url: '/api/drive/progress', cookie: organiser },
+    ];
+    const bodies: Buffer[] = [];
+    const gzipBytes: number[] = [];
+    for (const r of routes) {
+      const plain = await raw(PORT, r.url, { headers: { cookie: r.cookie } });
+      if (plain.status !== 200) throw new Error(`${r.name} answered ${plain.status}: ${plain.body.toString().slice(0, 200)}`);
+      bodies.push(plain.body);
+      gzipBytes.push((await raw(PORT, r.url, { headers: { cookie: r.cookie, 'accept-encoding': 'gzip' } })).body.length);
+    }
+    const bodiesFile = path.join(dir, 'bodies.json');
+    fs.writeFileSync(bodiesFile, JSON.stringify(bodies.map((b) => b.toString('base64'))));
+    bare = spawn(process.execPath, ['--import', 'tsx', 'bench/bare-server.ts'], {
+      cwd: root,
+      stdio: ['ignore', 'ignore', 'inherit'],
+      env: { ...process.env, NODE_ENV: 'production', BARE_PORT: String(BARE_PORT), BARE_BODIES: bodiesFile },
+    });
+    await waitFor(BARE_PORT, '/r/0', 30_000);
+
+    const rows: string[] = [];
+    console.log(`\n${CONNECTIONS} connections, ${DURATION} s per route; Kindloop first, then bare Express with the same bytes\n`);
+    for (const [i, r] of routes.entries()) {
+      const k = await load(`http://127.0.0.1:${PORT}${r.url}`, { cookie: r.cookie });
+      const b = await load(`http://127.0.0.1:${BARE_PORT}/r/${i}`, {});
+      const ratio = k.rps / b.rps;
+      const row = `| ${r.name} | ${k.rps.toFixed(0)} | ${k.p50} | ${k.p99} | ${bodies[i]!.length.toLocaleString('en')} | ${gzipBytes[i]!.toLocaleString('en')} | ${b.rps.toFixed(0)} | ${b.p99} | ${ratio.toFixed(2)}× |${k.errors ? ` ${k.errors} errors/non-2xx` : ''}`;
+      rows.push(row);
+      console.log(row);
+    }
+    clearInterval(sampler);
+    maxRss = Math.max(maxRss, rssOf(server.pid!));
+
+    const cpu = os.cpus();
+    const machine = `${cpu[0]?.model ?? 'unknown CPU'} (${cpu.length} cores, shared), ${(os.totalmem() / 2 ** 30).toFixed(1)} GiB RAM, ${os.type()} ${os.release()}, Node ${process.version}`;
+    const report = [
+      '<!-- api-bench:start -->',
+      `Run on ${new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC by \`npm run bench:api\`; machine: ${machine}.`,
+      `Database: ${path.relative(root, DB)} (the demo grown by bench/grow-demo.ts). ${CONNECTIONS} connections, ${DURATION} s per route; autocannon sends no Accept-Encoding, so both sides send the plain bytes.`,
+      '',
+      `Server start to first answer: ${startSeconds.toFixed(1)} s. Largest RSS during the run: ${(maxRss / 2 ** 20).toFixed(0)} MB.`,
+      '',
+      '| route (role) | Kindloop req/s | p50 ms | p99 ms | bytes | gzip bytes | bare Express req/s | bare p99 ms | ratio |',
+      '|---|---|---|---|---|---|---|---|---|',
+      ...rows,
+      '<!-- api-bench:end -->',
+    ].join('\n');
+    console.log(`\nstart ${startSeconds.toFixed(1)} s, largest RSS ${(maxRss / 2 ** 20).toFixed(0)} MB`);
+    if (!process.argv.includes('--no-write')) {
+      const readme = path.join(root, 'bench', 'README.md');
+      const text = fs.existsSync(readme) ? fs.readFileSync(readme, 'utf8') : '';
+      const next = /<!-- api-bench:start -->[\s\S]*<!-- api-bench:end -->/.test(text)
+        ? text.replace(/<!-- api-bench:start -->[\s\S]*<!-- api-bench:end -->/, report)
+        : `${text}\n${report}\n`;
+      fs.writeFileSync(readme, next);
+      console.log('Wrote the figures into bench/README.md');
+    }
+  } finally {
+    cleanUp();
+  }
+}
+
+await main();

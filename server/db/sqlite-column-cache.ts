@@ -1,0 +1,54 @@
+import sqlite3 from 'sqlite3';
+
+type Callback = (err: Error | null, rows: unknown[]) => void;
+
+/**
+ * Sequelize's SQLite dialect asks `PRAGMA table_info(...)` for the table of every SELECT it runs, to
+ * know which columns to parse as dates and JSON (lib/dialects/sqlite/query.js, `run`). The answer
+ * only changes when the schema does, so this Database remembers it per connection and forgets it
+ * whenever a statement that can change a schema (CREATE, ALTER, DROP) goes through the connection.
+ * It is handed to Sequelize as its `dialectModule`, the documented way to swap the driver.
+ */
+const TABLE_INFO = /^PRAGMA table_info\(`([^`]+)`\)$/;
+const CHANGES_SCHEMA = /^\s*(CREATE|ALTER|DROP)\b/i;
+
+class CachingDatabase extends sqlite3.Database {
+  private columnInfo = new Map<string, unknown[]>();
+
+  private forgetIfSchemaChanges(sql: unknown) {
+    if (typeof sql === 'string' && CHANGES_SCHEMA.test(sql)) this.columnInfo.clear();
+  }
+
+  override all(sql: string, ...rest: unknown[]): this {
+    const match = TABLE_INFO.exec(sql);
+    const callback = rest[rest.length - 1];
+    if (match && rest.length === 1 && typeof callback === 'function') {
+      const table = match[1]!;
+      const cached = this.columnInfo.get(table);
+      if (cached) {
+        process.nextTick(() => (callback as Callback).call(this, null, cached));
+        return this;
+      }
+      return super.all(sql, (err: Error | null, rows: unknown[]) => {
+        // An empty answer means the table is not there yet; ask again next time.
+        if (!err && rows.length > 0) this.columnInfo.set(table, rows);
+        (callback as Callback).call(this, err, rows);
+      });
+    }
+    this.forgetIfSchemaChanges(sql);
+    return (super.all as (...args: unknown[]) => this)(sql, ...rest);
+  }
+
+  override run(sql: string, ...rest: unknown[]): this {
+    this.forgetIfSchemaChanges(sql);
+    return (super.run as (...args: unknown[]) => this)(sql, ...rest);
+  }
+
+  override exec(sql: string, ...rest: unknown[]): this {
+    this.forgetIfSchemaChanges(sql);
+    return (super.exec as (...args: unknown[]) => this)(sql, ...rest);
+  }
+}
+
+/** The sqlite3 module with its Database swapped for the caching one. */
+export const cachingSqlite3 = { ...sqlite3, Database: CachingDatabase } as unknown as typeof sqlite3;

@@ -1,0 +1,148 @@
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { Need } from '../../db/models/need';
+import { Pledge } from '../../db/models/pledge';
+import { Blanket } from '../../db/models/blanket';
+import { ASSIGNED_STATUSES, FINISHED_STATUSES, WITH_ORGANISERS } from '@shared/blankets/status';
+import type { NeedCounts } from '@shared/schemas/pledge';
+
+/** The pledges whose blankets are promised: a fulfilled pledge still counts, its blankets are made. */
+export const PROMISING_PLEDGE_STATUSES = ['active', 'fulfilled'] as const;
+
+const list = (xs: readonly string[]) => xs.map((s) => `'${s}'`).join(', ');
+
+/**
+ * Wanted, pledged, finished, in hand and assigned for each of these needs, in one aggregate query.
+ * Every page and chart that shows these figures takes them from here, so they agree.
+ * `blankets: false` skips the blanket figures (left at 0) for pages that only show what is
+ * promised, such as "What's needed", so they don't walk every blanket of the drive.
+ */
+export async function needCounts(
+  needIds: readonly number[],
+  opts: { blankets?: boolean; transaction?: Transaction } = {},
+): Promise<Map<number, NeedCounts>> {
+  if (needIds.length === 0) return new Map();
+  const withBlankets = opts.blankets !== false;
+  // Inside a transaction the caller may be looking at its own uncommitted writes: no cache.
+  if (opts.transaction) return countNeeds(needIds, withBlankets, opts.transaction);
+  const sequelize = Need.sequelize!;
+  watchWrites(sequelize);
+  const memo = memoFor(sequelize);
+  const key = `${withBlankets ? 'b' : 'p'}:${[...needIds].sort((a, b) => a - b).join(',')}`;
+  const hit = memo.entries.get(key);
+  if (hit && hit.generation === memo.generation && Date.now() - hit.at < MEMO_MS) return hit.counts;
+  const generation = memo.generation;
+  const counts = await countNeeds(needIds, withBlankets);
+  // A write that committed while we counted makes this answer stale: hand it out, don't keep it.
+  if (memo.generation === generation) {
+    if (memo.entries.size >= 200) memo.entries.clear();
+    memo.entries.set(key, { generation, at: Date.now(), counts });
+  }
+  return counts;
+}
+
+/**
+ * Counts are asked for on every view of "What's needed" and the recipient pages, and change only
+ * when a pledge, a blanket or a need is written. So answers are kept per database until any such
+ * write (the models' hooks, and again when the writing transaction commits), and for at most a few
+ * seconds in case something writes past the models.
+ */
+const MEMO_MS = 5_000;
+interface Memo {
+  generation: number;
+  entries: Map<string, { generation: number; at: number; counts: Map<number, NeedCounts> }>;
+}
+const memos = new WeakMap<Sequelize, Memo>();
+const watched = new WeakMap<Sequelize, Set<unknown>>();
+
+function memoFor(sequelize: Sequelize): Memo {
+  let m = memos.get(sequelize);
+  if (!m) memos.set(sequelize, (m = { generation: 0, entries: new Map() }));
+  return m;
+}
+
+const WRITE_HOOKS = ['afterCreate', 'afterUpdate', 'afterDestroy', 'afterSave', 'afterUpsert', 'afterBulkCreate', 'afterBulkUpdate', 'afterBulkDestroy'] as const;
+
+function watchWrites(sequelize: Sequelize) {
+  const seen = watched.get(sequelize) ?? new Set<unknown>();
+  watched.set(sequelize, seen);
+  for (const model of [Need, Pledge, Blanket]) {
+    // Models are initialised again for each database a test opens; watch each initialisation once.
+    const id = model.options;
+    if (seen.has(id)) continue;
+    seen.add(id);
+    const forget = (...args: unknown[]) => {
+      const memo = memoFor(sequelize);
+      memo.generation += 1;
+      memo.entries.clear();
+      const options = args.find((a): a is { transaction?: Transaction | null } => typeof a === 'object' && a !== null && 'transaction' in a);
+      options?.transaction?.afterCommit(() => {
+        memo.generation += 1;
+        memo.entries.clear();
+      });
+    };
+    for (const hook of WRITE_HOOKS) (model as unknown as { addHook: (h: string, fn: (...a: unknown[]) => void) => void }).addHook(hook, forget);
+  }
+}
+
+async function countNeeds(needIds: readonly number[], withBlankets: boolean, transaction?: Transaction): Promise<Map<number, NeedCounts>> {
+  const out = new Map<number, NeedCounts>();
+  // The status lists are constants of the code, never input, so they are written into the SQL.
+  const blanketColumns = withBlankets
+    ? `, COALESCE(b.finished, 0) AS finished, COALESCE(b.inHand, 0) AS inHand, COALESCE(b.assigned, 0) AS assigned`
+    : `, 0 AS finished, 0 AS inHand, 0 AS assigned`;
+  const blanketJoin = withBlankets
+    ? `LEFT JOIN (
+         SELECT p.needId AS needId,
+           SUM(CASE WHEN bl.status IN (${list(FINISHED_STATUSES)}) THEN 1 ELSE 0 END) AS finished,
+           SUM(CASE WHEN bl.status IN (${list(WITH_ORGANISERS)}) THEN 1 ELSE 0 END) AS inHand,
+           SUM(CASE WHEN bl.status IN (${list(ASSIGNED_STATUSES)}) THEN 1 ELSE 0 END) AS assigned
+         FROM pledges p JOIN blankets bl ON bl.pledgeId = p.id
+         WHERE p.needId IN (:needIds) AND p.status IN (${list(PROMISING_PLEDGE_STATUSES)})
+         GROUP BY p.needId
+       ) b ON b.needId = n.id`
+    : '';
+  const rows = await Need.sequelize!.query<{
+    needId: number;
+    recipientId: number;
+    wanted: number;
+    pledged: number;
+    finished: number;
+    inHand: number;
+    assigned: number;
+  }>(
+    `SELECT n.id AS needId, n.recipientId AS recipientId, n.quantity AS wanted,
+       COALESCE(pl.pledged, 0) AS pledged${blanketColumns}
+     FROM needs n
+     LEFT JOIN (
+       SELECT needId, SUM(quantity) AS pledged FROM pledges
+       WHERE needId IN (:needIds) AND status IN (${list(PROMISING_PLEDGE_STATUSES)})
+       GROUP BY needId
+     ) pl ON pl.needId = n.id
+     ${blanketJoin}
+     WHERE n.id IN (:needIds)`,
+    { replacements: { needIds: [...needIds] }, type: QueryTypes.SELECT, transaction },
+  );
+  for (const r of rows) {
+    out.set(r.needId, {
+      needId: r.needId,
+      recipientId: r.recipientId,
+      wanted: Number(r.wanted),
+      pledged: Number(r.pledged),
+      finished: Number(r.finished),
+      inHand: Number(r.inHand),
+      assigned: Number(r.assigned),
+    });
+  }
+  return out;
+}
+
+/** The figures for a need that has none yet (just created, or not found). */
+export const noCounts = (needId: number, recipientId: number, wanted: number): NeedCounts => ({
+  needId,
+  recipientId,
+  wanted,
+  pledged: 0,
+  finished: 0,
+  inHand: 0,
+  assigned: 0,
+});
