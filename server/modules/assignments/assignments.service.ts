@@ -8,10 +8,10 @@ import { Pledge } from '../../db/models/pledge';
 import { Recipient } from '../../db/models/recipient';
 import { Site } from '../../db/models/site';
 import { User } from '../../db/models/user';
-import { HttpError, notFound } from '../../lib/http-error';
+import { HttpError, fieldError, notFound } from '../../lib/http-error';
 import { moveBlanket } from '../blankets/move-blanket';
 import { storedGuidelines } from '../recipients/recipients.service';
-import type { Actor } from '../pledges/pledges.service';
+import type { Actor } from '../../auth/actor';
 import { STATUS_LABELS } from '@shared/blankets/status';
 import { cautionsFor } from '@shared/guidelines/cautions';
 import { sizeCategoryFor, sizeCategoryRow } from '@shared/guidelines/size-categories';
@@ -42,7 +42,6 @@ type LoadedNeed = Need & { recipient: Recipient };
 type LoadedAssignment = Assignment & { blanket?: Blanket; need?: Need; recipient?: Recipient; assignedBy?: User | null };
 
 const needName = (n: LoadedNeed) => `${n.recipient.name} (${sizeCategoryRow(n.sizeCategory).label})`;
-const fieldError = (status: number, path: string, message: string) => new HttpError(status, `${path}: ${message}`, [{ path, message }]);
 
 function view(a: LoadedAssignment): AssignmentView {
   return {
@@ -80,7 +79,7 @@ async function liveOnNeed(needId: number, transaction: Transaction): Promise<num
 
 async function loadNeed(needId: number, transaction: Transaction): Promise<LoadedNeed> {
   const need = (await Need.findByPk(needId, { include: [{ model: Recipient, as: 'recipient' }], transaction })) as LoadedNeed | null;
-  if (!need) throw fieldError(400, 'needId', 'there is no such need');
+  if (!need) throw fieldError(400, 'needId', 'There is no such need');
   if (!need.recipient.active) throw fieldError(400, 'needId', `${need.recipient.name} is not taking blankets at the moment`);
   return need;
 }
@@ -132,7 +131,7 @@ async function assignInside(
   transaction: Transaction,
 ): Promise<number> {
   const b = await Blanket.findByPk(pair.blanketId, { transaction });
-  if (!b) throw fieldError(400, 'blanketId', 'there is no such blanket');
+  if (!b) throw fieldError(400, 'blanketId', 'There is no such blanket');
   if (b.status !== 'checked') throw await notFree(b, transaction);
   const need = await loadNeed(pair.needId, transaction);
   const refused = await refusalFor(b, need, transaction);
@@ -220,7 +219,7 @@ async function liveAssignment(id: number, transaction: Transaction): Promise<Ass
 export async function reassign(sequelize: Sequelize, actor: Actor, id: number, body: ReassignBody): Promise<AssignmentView> {
   const newId = await sequelize.transaction(async (transaction) => {
     const a = await liveAssignment(id, transaction);
-    if (a.needId === body.needId) throw fieldError(409, 'needId', 'it is assigned to that need already');
+    if (a.needId === body.needId) throw fieldError(409, 'needId', 'It is assigned to that need already');
     const need = await loadNeed(body.needId, transaction);
     const refused = await refusalFor(a.blanket, need, transaction);
     if (refused) throw refused;
@@ -437,8 +436,8 @@ export async function boardWaiting(q: BoardQuery, today = new Date()): Promise<P
 
 /** The optimal suggestion for the whole drive, one site's stock or one recipient's needs. Writes nothing. */
 export async function suggest(body: SuggestBody, today = new Date()): Promise<Suggestion> {
-  if (body.siteId && !(await Site.findByPk(body.siteId))) throw fieldError(400, 'siteId', 'there is no such drop-off site');
-  if (body.recipientId && !(await Recipient.findByPk(body.recipientId))) throw fieldError(400, 'recipientId', 'there is no such recipient');
+  if (body.siteId && !(await Site.findByPk(body.siteId))) throw fieldError(400, 'siteId', 'There is no such drop-off site');
+  if (body.recipientId && !(await Recipient.findByPk(body.recipientId))) throw fieldError(400, 'recipientId', 'There is no such recipient');
   const needs = await openNeeds({ recipientId: body.recipientId }, today);
   const blankets = (await waitingBlankets(body.siteId)).map(matchBlanket);
   const matchNeeds: MatchNeed[] = needs.map((n) => ({
