@@ -34,6 +34,16 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.addIndex('assignments', ['blanketId'], { name: 'assignments_live_blanket', unique: true, where: { endedAt: null } });
   await qi.addIndex('assignments', ['needId', 'endedAt'], { name: 'assignments_need_live' });
   await qi.addIndex('assignments', ['recipientId', 'endedAt'], { name: 'assignments_recipient_live' });
+  // Blankets already past "checked" were assigned by a bare status change to their pledge's need:
+  // give each of them the record it would have had, so need counts and capacity include them.
+  await qi.sequelize.query(`
+    INSERT INTO assignments (blanketId, needId, recipientId, assignedById, assignedAt, priorRecipientId, source, version, createdAt, updatedAt)
+    SELECT b.id, p.needId, n.recipientId, NULL, b.updatedAt, b.recipientId, 'board', 0, b.updatedAt, b.updatedAt
+    FROM blankets b JOIN pledges p ON p.id = b.pledgeId JOIN needs n ON n.id = p.needId
+    WHERE b.status IN ('assigned', 'packed', 'delivered')`);
+  await qi.sequelize.query(`
+    UPDATE blankets SET recipientId = (SELECT a.recipientId FROM assignments a WHERE a.blanketId = blankets.id AND a.endedAt IS NULL)
+    WHERE id IN (SELECT blanketId FROM assignments WHERE endedAt IS NULL)`);
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {
