@@ -4,6 +4,7 @@
  */
 import { usToUkText } from '../sizing/stitch-names';
 import { CORNER_STITCHES } from './row-ends';
+import type { RoundMode } from './round';
 
 export type Difficulty = 1 | 2 | 3;
 
@@ -18,9 +19,10 @@ export interface BorderPattern {
   /** 0-based stitch of the repeat that holds its centre (where a shell's dc go). */
   centre: number;
   /**
-   * Foundation stitches worked into each corner stitch when the pattern needs other than the usual 3
-   * (CORNER_STITCHES): chosen so the corner stitches and the next edge's first stitch make one whole
-   * repeat, which puts a repeat on the corner. Worked by hand; no published source.
+   * Foundation stitches worked into each corner stitch, when fitted edge by edge, where the pattern
+   * needs other than the usual 3 (CORNER_STITCHES): chosen so the corner stitches and the next edge's
+   * first stitch make one whole repeat, which puts a repeat on the corner. Worked by hand; no
+   * published source.
    */
   cornerStitches?: number;
   rounds: number;
@@ -194,8 +196,15 @@ export const BORDER_LIBRARY: readonly BorderPattern[] = [
   },
 ];
 
-/** What the border engine needs to know of a library border. */
-export function borderPlanOptions(pattern: BorderPattern): {
+/**
+ * What the border engine needs to know of a library border. A border's own corner count serves
+ * fitting edge by edge, where each corner must hold a whole repeat; one continuous round keeps the
+ * usual 3 corner stitches and moves its first repeat to centre the corners instead.
+ */
+export function borderPlanOptions(
+  pattern: BorderPattern,
+  mode: RoundMode = 'per-edge',
+): {
   multiple: number;
   offset: number;
   lead: number;
@@ -207,7 +216,7 @@ export function borderPlanOptions(pattern: BorderPattern): {
     offset: pattern.offset,
     lead: pattern.lead,
     centre: pattern.centre,
-    cornerStitches: pattern.cornerStitches ?? CORNER_STITCHES,
+    cornerStitches: mode === 'per-edge' ? (pattern.cornerStitches ?? CORNER_STITCHES) : CORNER_STITCHES,
   };
 }
 

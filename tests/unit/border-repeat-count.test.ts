@@ -74,7 +74,7 @@ describe('every library border: repeats × N never exceeds the round', () => {
           fc.constantFrom('per-edge' as const, 'continuous' as const),
           fc.constantFrom('add' as const, 'fewest' as const),
           (across, rows, mode, strategy) => {
-            const p = planBorder({ across, rows, ...borderPlanOptions(b), mode, strategy });
+            const p = planBorder({ across, rows, ...borderPlanOptions(b, mode), mode, strategy });
             expect(p.round.repeats * b.multiple).toBeLessThanOrEqual(p.round.total);
             // What the notes claim about the corners is what the simulation found.
             const all = p.cornerReport.every((c) => c.centred);

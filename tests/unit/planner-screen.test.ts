@@ -80,7 +80,7 @@ describe('the blanket drawing', () => {
         fc.constantFrom('per-edge' as const, 'continuous' as const),
         fc.integer({ min: 260, max: 1200 }),
         (across, rows, border, strategy, mode, width) => {
-          const plan = planBorder({ across, rows, ...borderPlanOptions(border), strategy, mode });
+          const plan = planBorder({ across, rows, ...borderPlanOptions(border, mode), strategy, mode });
           const d = layoutDrawing(plan, border, across, rows, rows, width);
           const f = d.foundation;
           const eps = 1e-6;

@@ -21,7 +21,7 @@ export function summarisePlan(input: PlanInput): PlanSummary {
   const plan = planBorder({
     across: input.across,
     rows: input.rows,
-    ...borderPlanOptions(border),
+    ...borderPlanOptions(border, input.mode),
     strategy: input.strategy,
     mode: input.mode,
   });

@@ -186,7 +186,7 @@ export function computePlanner(s: PlannerState): PlannerResult {
       plan = planBorder({
         across,
         rows,
-        ...borderPlanOptions(border),
+        ...borderPlanOptions(border, s.mode),
         strategy: s.strategy,
         mode: s.mode,
       });
