@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { haversineKm, type LatLng } from '@shared/routing/distance';
-import { nearestNeighbourRoute, suggestRoute, tourOf } from '@shared/routing/route';
+import { nearestNeighbourRoute, suggestRoute } from '@shared/routing/route';
 
 /** Every order of the stops, for the brute-force optimum. */
 function* permutations(n: number): Generator<number[]> {

@@ -7,5 +7,7 @@ import './recipients';
 
 export {};
 import './volunteering';
+// Delivery runs take the assigned, packed and delivered blankets the volunteering step made.
+import './delivery';
 // Photos last: they picture the blankets the steps above made.
 import './photos';
