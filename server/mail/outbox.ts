@@ -1,17 +1,19 @@
 import type { Transaction } from 'sequelize';
 import { MailMessage } from '../db/models/mail-message';
+import type { MailAttachment } from './attachment';
 
 export interface OutgoingMail {
   to: string;
   subject: string;
   text: string;
   html?: string;
+  attachments?: MailAttachment[];
 }
 
 /** Write a message into the outbox inside the caller's transaction: it is sent only if the change commits. */
 export async function enqueueMail(mail: OutgoingMail, transaction?: Transaction) {
   return MailMessage.create(
-    { to: mail.to, subject: mail.subject, text: mail.text, html: mail.html ?? null, nextAttemptAt: new Date() },
+    { to: mail.to, subject: mail.subject, text: mail.text, html: mail.html ?? null, attachments: mail.attachments?.length ? mail.attachments : null, nextAttemptAt: new Date() },
     { transaction },
   );
 }

@@ -22,7 +22,14 @@ export async function deliverDue(transport: Transporter, from: string, now = new
   let sent = 0;
   for (const msg of due) {
     try {
-      await transport.sendMail({ from, to: msg.to, subject: msg.subject, text: msg.text, html: msg.html ?? undefined });
+      await transport.sendMail({
+        from,
+        to: msg.to,
+        subject: msg.subject,
+        text: msg.text,
+        html: msg.html ?? undefined,
+        attachments: (msg.attachments ?? []).map((a) => ({ filename: a.filename, contentType: a.contentType, content: a.content })),
+      });
       await msg.update({ status: 'sent', sentAt: new Date(), attempts: msg.attempts + 1, lastError: null });
       sent++;
     } catch (err) {

@@ -14,6 +14,7 @@ import { initBlanket, Blanket } from './blanket';
 import { initBlanketEvent, BlanketEvent } from './blanket-event';
 import { initPhoto, Photo } from './photo';
 import { initPlan, Plan } from './plan';
+import { initAssignment, Assignment } from './assignment';
 import { initRuns, Run, RunStop, RunBlanket, Export } from './run';
 
 /**
@@ -35,6 +36,7 @@ export function initModels(sequelize: Sequelize) {
   initBlanketEvent(sequelize);
   initPhoto(sequelize);
   initPlan(sequelize);
+  initAssignment(sequelize);
   initRuns(sequelize);
 
   PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
@@ -67,6 +69,13 @@ export function initModels(sequelize: Sequelize) {
   Blanket.hasMany(Photo, { foreignKey: 'blanketId', as: 'photos' });
   Photo.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
 
+  Blanket.hasMany(Assignment, { foreignKey: 'blanketId', as: 'assignments' });
+  Assignment.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+  Need.hasMany(Assignment, { foreignKey: 'needId', as: 'assignments' });
+  Assignment.belongsTo(Need, { foreignKey: 'needId', as: 'need' });
+  Assignment.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
+  Assignment.belongsTo(Recipient, { foreignKey: 'priorRecipientId', as: 'priorRecipient' });
+  Assignment.belongsTo(User, { foreignKey: 'assignedById', as: 'assignedBy' });
   Run.belongsTo(User, { foreignKey: 'driverId', as: 'driver' });
   Run.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
   Run.belongsTo(Site, { foreignKey: 'startSiteId', as: 'startSite' });

@@ -7,7 +7,9 @@ import './recipients';
 
 export {};
 import './volunteering';
-// Delivery runs take the assigned, packed and delivered blankets the volunteering step made.
+// Assignments after the blankets they place.
+import './assignments';
+// Delivery runs take the assigned, packed and delivered blankets the steps above made.
 import './delivery';
 // Photos last: they picture the blankets the steps above made.
 import './photos';

@@ -7,6 +7,7 @@ export interface CaughtMail {
   to: string;
   subject: string;
   text: string;
+  attachments: Array<{ filename: string; contentType: string; content: string }> | null;
   receivedAt: string;
 }
 
