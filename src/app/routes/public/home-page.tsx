@@ -4,7 +4,7 @@ import { Card } from '@/components/ui/card';
 import { useDrive } from '@/features/drive/api/get-drive';
 import { useMe } from '@/features/auth/api/get-me';
 import { formatDay } from '@/components/ui/format-day';
-
+import { useDocumentTitle } from '@/components/ui/document-title';
 
 const steps = [
   { icon: HeartHandshake, title: 'Pledge', text: 'See what each neonatal unit, ward, shelter and care home needs, and promise what you can make.' },
@@ -18,6 +18,7 @@ export default function HomePage() {
   const { data } = useDrive();
   const { data: user } = useMe();
   const drive = data?.drive;
+  useDocumentTitle(drive ? `${drive.name}, ${drive.town}` : 'Handmade blankets for the drive');
   return (
     <div className="space-y-10">
       <section className="grid items-center gap-8 rounded-3xl bg-heather-800 px-6 py-10 text-white sm:px-10 md:grid-cols-[3fr_2fr]">

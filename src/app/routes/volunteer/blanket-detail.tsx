@@ -116,9 +116,10 @@ export default function BlanketDetailPage() {
       />
       {state.logged && (
         <Alert kind="success" title="Saved. Thank you!">
-          <span className="flex items-center gap-2">
-            <Tag className="size-5" aria-hidden /> Write <strong className="font-mono text-lg" data-testid="new-code">{b.code}</strong> on its tag (or print tags from the <Link to="/tags">tag sheet</Link>), so the organisers can find it in the log.
-          </span>
+          {/* Plain flowing text: as flex items the words, code and link became narrow columns on a phone. */}
+          <p>
+            <Tag className="mr-1 inline size-5 align-text-bottom" aria-hidden /> Write <strong className="font-mono text-lg" data-testid="new-code">{b.code}</strong> on its tag (or print tags from the <Link to="/tags">tag sheet</Link>), so the organisers can find it in the log.
+          </p>
         </Alert>
       )}
       {state.photoError && (
