@@ -72,3 +72,15 @@ describe('one history, one badge, one date format', () => {
     expect(offenders).toEqual([]);
   });
 });
+
+describe("charts keep recipients' names whole", () => {
+  it('wraps a long name on whole words instead of cutting it', async () => {
+    const { wrapName } = await import('../../src/features/progress/components/progress-data');
+    expect(wrapName("Bramblewick Children's Ward, Thimbleford General")).toEqual(['Bramblewick', "Children's Ward,", 'Thimbleford General']);
+    expect(wrapName('Tansy Court Care Home')).toEqual(['Tansy Court Care', 'Home']);
+    expect(wrapName('Kestrel Rise Hospice')).toEqual(['Kestrel Rise Hospice']);
+    const long = wrapName('A very long name of a place that goes on and on for ever and ever');
+    expect(long).toHaveLength(3);
+    expect(long[2]).toMatch(/…$/);
+  });
+});

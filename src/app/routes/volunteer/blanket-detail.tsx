@@ -18,7 +18,7 @@ import { StatusActions } from '@/features/blankets/components/status-actions';
 import { SelfCheckPanel } from '@/features/blankets/components/self-check-panel';
 import { PhotoGallery } from '@/features/blankets/components/photo-gallery';
 import { BlanketHistory } from '@/components/ui/blanket-history';
-import { BODY_STITCH_LABELS, sizeLabel, yarnWeightLabel } from '@/features/blankets/components/labels';
+import { BODY_STITCH_LABELS, NO_LIBRARY_BORDER, sizeLabel, yarnWeightLabel } from '@/features/blankets/components/labels';
 import type { SelfCheck } from '@/features/blankets/hooks/use-self-check';
 import type { BlanketDetail } from '@shared/schemas/blanket-log';
 import { borderById } from '@shared/border/library';
@@ -41,7 +41,7 @@ function Details({ b, isMaker }: { b: BlanketDetail; isMaker: boolean }) {
     ['New yarn', yes(b.newYarn)],
     ['Colours', b.colours || '—'],
     ['Body stitch', BODY_STITCH_LABELS[b.bodyStitch] ?? b.bodyStitch],
-    ['Border', b.borderId ? (borderById(b.borderId)?.name ?? b.borderId) : 'None from the library'],
+    ['Border', b.borderId ? (borderById(b.borderId)?.name ?? b.borderId) : NO_LIBRARY_BORDER],
     ['Trims', b.features.length ? capitalise(joinWords(b.features.map(featureLabel))) : 'None'],
     ['Machine washable', yes(b.machineWashable)],
     ['Dryer safe', yes(b.dryerSafe)],
@@ -154,7 +154,7 @@ export default function BlanketDetailPage() {
           </Card>
         </div>
         <div className="space-y-6">
-          <SelfCheckPanel outcome={outcomeOf(b)} cautions={b.cautions} />
+          <SelfCheckPanel outcome={outcomeOf(b)} cautions={b.cautions} viewer={isMaker ? 'maker' : 'staff'} />
           <Card>
             <CardTitle>History</CardTitle>
             <BlanketHistory events={b.events} />
