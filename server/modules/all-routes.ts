@@ -15,6 +15,7 @@ import { guidelineRoutes } from './guidelines/guidelines.router';
 import { pledgeRoutes } from './pledges/pledges.router';
 import { blanketRoutes } from './blankets/blankets.router';
 import { photoRoutes } from './photos/photos.router';
+import { assignmentRoutes } from './assignments/assignments.router';
 
 export interface RouteContext {
   sequelize: Sequelize;
@@ -45,5 +46,6 @@ export function allRoutes(ctx: RouteContext): RouteDef[] {
     ...pledgeRoutes(ctx.sequelize),
     ...blanketRoutes(ctx.sequelize),
     ...photoRoutes(ctx.sequelize, ctx.config),
+    ...assignmentRoutes(ctx.sequelize),
   ];
 }

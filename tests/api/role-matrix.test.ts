@@ -67,6 +67,14 @@ const matrix: Record<string, Row> = {
   'POST /api/blankets/:id/intake': STAFF,
   'POST /api/blankets/:id/inspection': STAFF,
   'GET /api/intake/queue': STAFF,
+  'GET /api/assignments': STAFF,
+  'POST /api/assignments': STAFF,
+  'POST /api/assignments/batch': STAFF,
+  'PATCH /api/assignments/:id': STAFF,
+  'DELETE /api/assignments/:id': STAFF,
+  'GET /api/assignments/board/needs': STAFF,
+  'GET /api/assignments/board/waiting': STAFF,
+  'POST /api/matching/suggest': STAFF,
 };
 
 const ROLES = ['anonymous', 'volunteer', 'organiser', 'coordinator'] as const;

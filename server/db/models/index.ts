@@ -14,6 +14,7 @@ import { initBlanket, Blanket } from './blanket';
 import { initBlanketEvent, BlanketEvent } from './blanket-event';
 import { initPhoto, Photo } from './photo';
 import { initPlan, Plan } from './plan';
+import { initAssignment, Assignment } from './assignment';
 
 /**
  * Every model is initialised here and every association is declared here, in one place.
@@ -34,6 +35,7 @@ export function initModels(sequelize: Sequelize) {
   initBlanketEvent(sequelize);
   initPhoto(sequelize);
   initPlan(sequelize);
+  initAssignment(sequelize);
 
   PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
@@ -64,4 +66,12 @@ export function initModels(sequelize: Sequelize) {
   BlanketEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   Blanket.hasMany(Photo, { foreignKey: 'blanketId', as: 'photos' });
   Photo.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+
+  Blanket.hasMany(Assignment, { foreignKey: 'blanketId', as: 'assignments' });
+  Assignment.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+  Need.hasMany(Assignment, { foreignKey: 'needId', as: 'assignments' });
+  Assignment.belongsTo(Need, { foreignKey: 'needId', as: 'need' });
+  Assignment.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
+  Assignment.belongsTo(Recipient, { foreignKey: 'priorRecipientId', as: 'priorRecipient' });
+  Assignment.belongsTo(User, { foreignKey: 'assignedById', as: 'assignedBy' });
 }

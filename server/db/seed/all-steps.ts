@@ -7,5 +7,7 @@ import './recipients';
 
 export {};
 import './volunteering';
+// Assignments after the blankets they place.
+import './assignments';
 // Photos last: they picture the blankets the steps above made.
 import './photos';
