@@ -83,8 +83,9 @@ async function addWaitingBlankets(ctx: SeedContext) {
   const { transaction, today } = ctx;
   const needs = (await Need.findAll({ include: [{ model: Recipient, as: 'recipient' }], order: [['id', 'ASC']], transaction })) as NeedWithRecipient[];
   const sites = await Site.findAll({ order: [['id', 'ASC']], transaction });
-  // Not the demo volunteer: her three blankets are the ones her pages are written around.
-  const makers = ctx.users.volunteers.filter((u) => u.id !== ctx.users.volunteer.id);
+  // Not the demo volunteer, whose pages are written around her three blankets, nor Oona, whose two
+  // pledges show a cancelled one and one for wherever needed.
+  const makers = ctx.users.volunteers.filter((u) => u.id !== ctx.users.volunteer.id && u.email !== 'oona@example.org');
   const organiser = ctx.users.organiser;
   let k = 0;
   for (const w of WAITING) {
