@@ -15,6 +15,7 @@ import { initBlanketEvent, BlanketEvent } from './blanket-event';
 import { initPhoto, Photo } from './photo';
 import { initPlan, Plan } from './plan';
 import { initAssignment, Assignment } from './assignment';
+import { initRuns, Run, RunStop, RunBlanket, Export } from './run';
 
 /**
  * Every model is initialised here and every association is declared here, in one place.
@@ -36,6 +37,7 @@ export function initModels(sequelize: Sequelize) {
   initPhoto(sequelize);
   initPlan(sequelize);
   initAssignment(sequelize);
+  initRuns(sequelize);
 
   PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
@@ -74,4 +76,18 @@ export function initModels(sequelize: Sequelize) {
   Assignment.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
   Assignment.belongsTo(Recipient, { foreignKey: 'priorRecipientId', as: 'priorRecipient' });
   Assignment.belongsTo(User, { foreignKey: 'assignedById', as: 'assignedBy' });
+  Run.belongsTo(User, { foreignKey: 'driverId', as: 'driver' });
+  Run.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Run.belongsTo(Site, { foreignKey: 'startSiteId', as: 'startSite' });
+  Run.hasMany(RunStop, { foreignKey: 'runId', as: 'stops' });
+  RunStop.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
+  RunStop.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
+  RunStop.hasMany(RunBlanket, { foreignKey: 'stopId', as: 'items' });
+  RunBlanket.belongsTo(RunStop, { foreignKey: 'stopId', as: 'stop' });
+  RunBlanket.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
+  RunBlanket.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+  Blanket.hasOne(RunBlanket, { foreignKey: 'blanketId', as: 'runItem' });
+  Export.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Export.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
+  Export.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
 }
