@@ -32,6 +32,11 @@ interface Waiting {
   fibres?: Fibre[];
   features?: Feature[];
   count: number;
+  /**
+   * Set for the few no recipient takes: they passed the table's checklist (well made, clean), and
+   * the organiser recorded why they were kept, as the inspection asks when it goes against the check.
+   */
+  keptBecause?: string;
 }
 
 const WAITING: Waiting[] = [
@@ -45,11 +50,11 @@ const WAITING: Waiting[] = [
   { pledgedFor: null, size: [92, 120], yarnWeight: 4, colours: ['charcoal', 'navy and cream', 'dusky rose', 'warm ochre', 'soft lavender', 'bright orange'], bodyStitch: 'hdc', count: 12 },
   { pledgedFor: { kind: 'hospice', size: 'throw' }, size: [127, 150], yarnWeight: 5, colours: ['soft lavender', 'gentle sea green'], bodyStitch: 'shell', count: 3 },
   // Fits no one as it is: only the newborn unit takes this size, and it refuses mohair, which sheds.
-  { pledgedFor: null, size: [46, 46], yarnWeight: 3, colours: ['cloud white mohair'], bodyStitch: 'knit-garter', fibres: ['mohair'], count: 2 },
+  { pledgedFor: null, size: [46, 46], yarnWeight: 3, colours: ['cloud white mohair'], bodyStitch: 'knit-garter', fibres: ['mohair'], count: 2, keptBecause: 'Beautifully made; none of our units takes mohair, so we will look for a home for it outside the usual list' },
   // A long narrow wrap: no unit's size span holds it.
-  { pledgedFor: null, size: [40, 170], yarnWeight: 4, colours: ['striped autumn wrap'], bodyStitch: 'dc', count: 1 },
-  // Pompoms on a preemie blanket: the newborn unit takes nothing that can come off.
-  { pledgedFor: { kind: 'neonatal-unit', size: 'preemie' }, size: [45, 46], yarnWeight: 3, colours: ['pink with pompoms'], bodyStitch: 'dc', features: ['pompoms'], count: 1 },
+  { pledgedFor: null, size: [40, 170], yarnWeight: 4, colours: ['striped autumn wrap'], bodyStitch: 'dc', count: 1, keptBecause: 'Well made but an odd shape; kept while we ask around for someone who wants a wrap' },
+  // Pompoms on a preemie-sized blanket: the newborn unit takes nothing that can come off.
+  { pledgedFor: null, size: [45, 46], yarnWeight: 3, colours: ['pink with pompoms'], bodyStitch: 'dc', features: ['pompoms'], count: 1, keptBecause: 'The maker may take the pompoms off; kept here until she can collect it' },
 ];
 
 async function recordEarlierAssignments(ctx: SeedContext) {
@@ -135,8 +140,17 @@ async function addWaitingBlankets(ctx: SeedContext) {
         ['received', 'checked', 'inspection', organiser.id, 3],
       ];
       for (const [fromStatus, toStatus, kind, actorId, day] of steps) {
+        const kept = kind === 'inspection' && w.keptBecause;
         const ev = await BlanketEvent.create(
-          { blanketId: b.id, actorId, kind, fromStatus: fromStatus as never, toStatus: toStatus as never, reason: null, data: null as BlanketEvent['data'] },
+          {
+            blanketId: b.id,
+            actorId,
+            kind,
+            fromStatus: fromStatus as never,
+            toStatus: toStatus as never,
+            reason: kept ? w.keptBecause! : null,
+            data: (kept ? { outcome: 'checked', overridden: true } : null) as BlanketEvent['data'],
+          },
           { transaction },
         );
         await BlanketEvent.update({ createdAt: at(day) }, { where: { id: ev.id }, transaction, silent: true });
