@@ -43,7 +43,7 @@ test('registration names what is wrong', async ({ page }) => {
   await page.getByRole('button', { name: 'Create my account' }).click();
   await expect(page.getByText('Tell us your name')).toBeVisible();
   await expect(page.getByText('Enter a valid e-mail address')).toBeVisible();
-  await expect(page.getByText('Use at least 8 characters')).toBeVisible();
+  await expect(page.getByText('Use at least 15 characters; a few words in a row work well')).toBeVisible();
 });
 
 test('a maker resets a forgotten password through the e-mailed link', async ({ page, browser }) => {
