@@ -11,3 +11,6 @@ export class HttpError extends Error {
 }
 
 export const notFound = (what = 'That record') => new HttpError(404, `${what} was not found`);
+
+/** A refusal that points at one field of the request, so the form can show it beside that field. */
+export const fieldError = (status: number, path: string, message: string) => new HttpError(status, message, [{ path, message }]);

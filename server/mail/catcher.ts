@@ -55,6 +55,14 @@ export function startMailCatcher(port: number, opts: { sender: string; credentia
             to: addresses(parsed.to),
             subject: parsed.subject ?? '(no subject)',
             text: parsed.text ?? '',
+            // Text attachments (calendar invitations) are kept whole so the mail page can offer them.
+            attachments: parsed.attachments.length
+              ? parsed.attachments.map((a) => ({
+                  filename: a.filename ?? 'attachment',
+                  contentType: a.contentType,
+                  content: a.contentType.startsWith('text/') ? a.content.toString('utf8') : '',
+                }))
+              : null,
           });
         })
         .then(() => callback(), (err: Error) => callback(err));

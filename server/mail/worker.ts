@@ -69,7 +69,14 @@ export async function deliverDue(transport: Transporter, from: string, now = new
     if (msg.status !== 'pending') continue;
     round.attempted++;
     try {
-      await transport.sendMail({ from, to: msg.to, subject: msg.subject, text: msg.text, html: msg.html ?? undefined });
+      await transport.sendMail({
+        from,
+        to: msg.to,
+        subject: msg.subject,
+        text: msg.text,
+        html: msg.html ?? undefined,
+        attachments: (msg.attachments ?? []).map((a) => ({ filename: a.filename, contentType: a.contentType, content: a.content })),
+      });
       await save(msg, { status: 'sent', sentAt: now, attempts: msg.attempts + 1, lastError: null });
       round.sent++;
     } catch (e) {

@@ -9,7 +9,7 @@ test('the coordinator’s home charts wanted, pledged and in hand per recipient,
   await expect(recipients.locator('.recharts-bar-rectangle').first()).toBeVisible();
   await expect(statuses.locator('.recharts-bar-rectangle').first()).toBeVisible();
   // The same figures are there for screen readers.
-  await expect(page.getByRole('table', { name: 'Wanted, pledged and in hand per recipient' })).toBeAttached();
+  await expect(page.getByRole('table', { name: 'Wanted, pledged, in hand and assigned per recipient' })).toBeAttached();
   await expect(page.getByRole('table', { name: 'Blankets by status' })).toContainText('Delivered');
   await shot(page, 'coordinator-progress');
 });

@@ -1,3 +1,4 @@
+import type { MailAttachment } from '../../mail/attachment';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
 /** Mail received by the built-in local catcher, so a fresh install can show what it would have sent. */
@@ -7,6 +8,7 @@ export class CaughtMail extends Model<InferAttributes<CaughtMail>, InferCreation
   declare to: string;
   declare subject: string;
   declare text: string;
+  declare attachments: CreationOptional<MailAttachment[] | null>;
   declare receivedAt: CreationOptional<Date>;
 }
 
@@ -18,6 +20,7 @@ export function initCaughtMail(sequelize: Sequelize) {
       to: { type: DataTypes.STRING(1000), allowNull: false },
       subject: { type: DataTypes.STRING(300), allowNull: false },
       text: { type: DataTypes.TEXT, allowNull: false },
+      attachments: { type: DataTypes.JSON, allowNull: true },
       receivedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
     },
     { sequelize, tableName: 'caught_mail', timestamps: false },

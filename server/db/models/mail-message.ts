@@ -1,3 +1,4 @@
+import type { MailAttachment } from '../../mail/attachment';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { MailStatus } from '@shared/schemas/mail';
 
@@ -10,6 +11,7 @@ export class MailMessage extends Model<InferAttributes<MailMessage>, InferCreati
   declare subject: string;
   declare text: string;
   declare html: CreationOptional<string | null>;
+  declare attachments: CreationOptional<MailAttachment[] | null>;
   declare status: CreationOptional<MailStatus>;
   declare attempts: CreationOptional<number>;
   declare nextAttemptAt: CreationOptional<Date>;
@@ -30,6 +32,7 @@ export function initMailMessage(sequelize: Sequelize) {
       subject: { type: DataTypes.STRING(300), allowNull: false },
       text: { type: DataTypes.TEXT, allowNull: false },
       html: { type: DataTypes.TEXT, allowNull: true },
+      attachments: { type: DataTypes.JSON, allowNull: true },
       status: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'pending' },
       attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       nextAttemptAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },

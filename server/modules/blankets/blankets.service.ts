@@ -8,7 +8,8 @@ import { Plan } from '../../db/models/plan';
 import { Recipient } from '../../db/models/recipient';
 import { Site } from '../../db/models/site';
 import { User } from '../../db/models/user';
-import { HttpError, notFound } from '../../lib/http-error';
+import { HttpError, fieldError, notFound } from '../../lib/http-error';
+import { maySee, readsAll, type Actor } from '../../auth/actor';
 import { pickBlanketFields, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
 import {
   LOG_FIELDS,
@@ -25,14 +26,13 @@ import { isIntakeMove, isMakerEditable, moveChannel, movesFrom } from '@shared/b
 import { moveBlanket } from './move-blanket';
 import { check, evaluate, type OtherRecipient } from '@shared/guidelines/check';
 import { activeRecipients, guidelinesOf, recipientBrief } from '../pledges/recipient-brief';
-import { readsAll, refreshPledgeStatus, type Actor } from '../pledges/pledges.service';
+import { pledgeTally, refreshPledgeStatus } from '../pledges/pledges.service';
+import { placesLeft } from '@shared/pledges/rules';
 import { uniqueBlanketCode } from './blanket-code';
 import type { Page } from '@shared/schemas/page';
 
 /** BlanketEvent.data is free-form JSON; the model's creation type can't say so. */
 const eventData = (v: unknown) => v as BlanketEvent['data'];
-
-const fieldError = (status: number, path: string, message: string) => new HttpError(status, message, [{ path, message }]);
 
 type Loaded = Blanket & {
   maker?: User;
@@ -73,7 +73,7 @@ export function photoView(p: Photo): PhotoView {
 /** The blanket if this person may see it: its maker, or anyone who reads every blanket. */
 export async function visibleBlanket(actor: Actor, id: number, transaction?: Transaction): Promise<Blanket> {
   const b = await Blanket.findByPk(id, { transaction });
-  if (!b || (b.userId !== actor.id && !readsAll(actor))) throw notFound('That blanket');
+  if (!b || !maySee(actor, b.userId)) throw notFound('That blanket');
   return b;
 }
 
@@ -239,8 +239,8 @@ export async function createBlanket(actor: Actor, body: BlanketCreate, transacti
   const pledge = await Pledge.findByPk(body.pledgeId, { include: [{ model: Need, as: 'need' }], transaction });
   if (!pledge || pledge.userId !== actor.id) throw fieldError(404, 'pledgeId', 'pledgeId: that pledge was not found among yours');
   if (pledge.status === 'cancelled') throw fieldError(409, 'pledgeId', 'pledgeId: that pledge was cancelled; choose another one');
-  const logged = await Blanket.count({ where: { pledgeId: pledge.id }, transaction });
-  if (logged >= pledge.quantity) {
+  const { logged } = await pledgeTally(pledge.id, transaction);
+  if (placesLeft(pledge.quantity, { logged }) === 0) {
     throw fieldError(
       409,
       'pledgeId',

@@ -5,7 +5,8 @@ import { HttpError } from '../../lib/http-error';
 import { enqueueMail, type OutgoingMail } from '../../mail/outbox';
 import type { BlanketStatus } from '@shared/schemas/blanket';
 import { STATUS_LABELS, checkTransition, moveChannel, type MoveChannel, type TransitionRefusal } from '@shared/blankets/status';
-import { refreshPledgeStatus, type Actor } from '../pledges/pledges.service';
+import { refreshPledgeStatus } from '../pledges/pledges.service';
+import type { Actor } from '../../auth/actor';
 
 /** One refusal, one HTTP status, wherever the move was asked for. */
 export const REFUSAL_STATUS: Record<TransitionRefusal | 'channel', number> = {

@@ -23,14 +23,9 @@ import {
   type InspectionBody,
   OUTCOME_LABELS,
 } from '@shared/schemas/intake';
-import type { Role } from '@shared/schemas/user';
+import { maySee, type Actor } from '../../auth/actor';
 import { checkAgainst, type CheckAnswer } from '../guidelines/guidelines.service';
 import { eventView } from '../blankets/blankets.service';
-
-export interface Actor {
-  id: number;
-  role: Role;
-}
 
 const INCLUDE = [
   { model: User, as: 'maker' },
@@ -414,7 +409,7 @@ export async function queue(q: IntakeQueueQuery): Promise<IntakeQueue> {
 export async function tags(ids: number[], actor: Actor, appUrl: string): Promise<BlanketTag[]> {
   const rows = (await Blanket.findAll({ where: { id: { [Op.in]: ids } }, include: INCLUDE })) as LoadedBlanket[];
   // A volunteer prints tags for their own blankets only; someone else's is "not found", not "forbidden".
-  const visible = rows.filter((b) => actor.role !== 'volunteer' || b.userId === actor.id);
+  const visible = rows.filter((b) => maySee(actor, b.userId));
   const found = new Set(visible.map((b) => b.id));
   const missing = ids.filter((i) => !found.has(i));
   if (missing.length > 0) {

@@ -5,6 +5,7 @@ import { MailMessage } from '../../db/models/mail-message';
 import { HttpError, notFound } from '../../lib/http-error';
 import { RETRY_FOR_MS, retryDeadline } from '../../mail/worker';
 import { isSoleAddressee, redactSingleUseLinks } from '../../mail/redact';
+import type { MailAttachment } from '../../mail/attachment';
 import type { Page } from '@shared/schemas/page';
 import type { OutboxCounts, OutboxItem, OutboxQuery } from '@shared/schemas/mail';
 
@@ -14,6 +15,7 @@ export interface CaughtMailView {
   to: string;
   subject: string;
   text: string;
+  attachments: MailAttachment[] | null;
   receivedAt: string;
   /** How many single-use links were taken out because the reader is not the addressee. */
   linksHidden: number;
@@ -21,8 +23,26 @@ export interface CaughtMailView {
 
 export function caughtView(m: CaughtMail, readerEmail: string): CaughtMailView {
   const own = isSoleAddressee(m.to, readerEmail);
-  const { text, hidden } = own ? { text: m.text, hidden: 0 } : redactSingleUseLinks(m.text);
-  return { id: m.id, from: m.from, to: m.to, subject: m.subject, text, receivedAt: new Date(m.receivedAt).toISOString(), linksHidden: hidden };
+  const redact = (t: string) => (own ? { text: t, hidden: 0 } : redactSingleUseLinks(t));
+  const body = redact(m.text);
+  let hidden = body.hidden;
+  // An attachment (a calendar invitation) is text the same way, and is read the same way.
+  const attachments =
+    m.attachments?.map((a) => {
+      const r = redact(a.content);
+      hidden += r.hidden;
+      return { ...a, content: r.text };
+    }) ?? null;
+  return {
+    id: m.id,
+    from: m.from,
+    to: m.to,
+    subject: m.subject,
+    text: body.text,
+    attachments,
+    receivedAt: new Date(m.receivedAt).toISOString(),
+    linksHidden: hidden,
+  };
 }
 
 export async function listCaught(readerEmail: string, q: { page: number; pageSize: number }): Promise<Page<CaughtMailView>> {

@@ -4,7 +4,7 @@ import { BlanketEvent } from '../../db/models/blanket-event';
 import { Photo } from '../../db/models/photo';
 import { HttpError, notFound } from '../../lib/http-error';
 import { MAX_PHOTOS_PER_BLANKET } from '@shared/schemas/blanket-log';
-import type { Actor } from '../pledges/pledges.service';
+import type { Actor } from '../../auth/actor';
 import { visibleBlanket } from '../blankets/blankets.service';
 import { preparePhoto, removeFiles, storedPhotoPath, writePhoto, type IncomingFile, type PreparedPhoto, type StoredNames } from './photo-files';
 

@@ -5,7 +5,7 @@ import { Recipient } from '../../db/models/recipient';
 import type { OpenNeed } from '@shared/schemas/pledge';
 import { recipientBrief, todayIso } from './recipient-brief';
 import { needCounts } from './need-counts';
-import type { Actor } from './pledges.service';
+import type { Actor } from '../../auth/actor';
 
 /**
  * Open needs (deadline today or later, recipient active) with what is promised against each.

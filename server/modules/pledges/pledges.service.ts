@@ -4,54 +4,39 @@ import { Need } from '../../db/models/need';
 import { Recipient } from '../../db/models/recipient';
 import { Blanket } from '../../db/models/blanket';
 import { User } from '../../db/models/user';
-import { HttpError, notFound } from '../../lib/http-error';
+import { HttpError, fieldError, notFound } from '../../lib/http-error';
+import { maySee, readsAll, type Actor } from '../../auth/actor';
 import {
   MAX_PLEDGE_DAYS_AHEAD,
-  isPledgeLate,
   type PledgeCreate,
   type PledgeListQuery,
   type PledgeSort,
   type PledgeUpdate,
   type PledgeView,
 } from '@shared/schemas/pledge';
-import type { BlanketStatus, SizeCategory } from '@shared/schemas/blanket';
+import type { SizeCategory } from '@shared/schemas/blanket';
 import { recipientBrief, todayIso, addDaysIso } from './recipient-brief';
-import { FINISHED_STATUSES } from '@shared/blankets/status';
+import { addToTally, emptyTally, isPledgeLate, pledgeStatusFor, type PledgeTally } from '@shared/pledges/rules';
 import type { Page } from '@shared/schemas/page';
 
-export interface Actor {
-  id: number;
-  role: Express.User['role'];
-}
+/** Kept here for callers written before the actor had its own home in server/auth/actor.ts. */
+export type { Actor } from '../../auth/actor';
 
-/** Organisers and coordinators read everyone's pledges; volunteers only their own. */
-export const readsAll = (actor: Actor) => actor.role !== 'volunteer';
-
-const fieldError = (status: number, path: string, message: string) => new HttpError(status, message, [{ path, message }]);
-
-/** A blanket counts as finished once it has left the hook, unless intake turned it away. */
-const countsAsFinished = (s: BlanketStatus) => FINISHED_STATUSES.includes(s);
-
-interface BlanketCounts {
-  logged: number;
-  finished: number;
-}
-
-async function blanketCounts(pledgeIds: number[], transaction?: Transaction): Promise<Map<number, BlanketCounts>> {
-  const out = new Map<number, BlanketCounts>();
+async function blanketCounts(pledgeIds: number[], transaction?: Transaction): Promise<Map<number, PledgeTally>> {
+  const out = new Map<number, PledgeTally>();
   if (pledgeIds.length === 0) return out;
   const rows = await Blanket.findAll({
     attributes: ['pledgeId', 'status'],
     where: { pledgeId: { [Op.in]: pledgeIds } },
     transaction,
   });
-  for (const b of rows) {
-    const c = out.get(b.pledgeId!) ?? { logged: 0, finished: 0 };
-    c.logged += 1;
-    if (countsAsFinished(b.status)) c.finished += 1;
-    out.set(b.pledgeId!, c);
-  }
+  for (const b of rows) out.set(b.pledgeId!, addToTally(out.get(b.pledgeId!) ?? emptyTally(), b.status));
   return out;
+}
+
+/** The tally of one pledge's blankets. */
+export async function pledgeTally(pledgeId: number, transaction?: Transaction): Promise<PledgeTally> {
+  return (await blanketCounts([pledgeId], transaction)).get(pledgeId) ?? emptyTally();
 }
 
 const include = (transaction?: Transaction) => ({
@@ -62,8 +47,8 @@ const include = (transaction?: Transaction) => ({
   transaction,
 });
 
-function view(p: Pledge, counts: BlanketCounts | undefined, today: string): PledgeView {
-  const c = counts ?? { logged: 0, finished: 0 };
+function view(p: Pledge, counts: PledgeTally | undefined, today: string): PledgeView {
+  const c = counts ?? emptyTally();
   const need = p.need ?? null;
   const user = (p as Pledge & { user?: User }).user;
   return {
@@ -79,6 +64,7 @@ function view(p: Pledge, counts: BlanketCounts | undefined, today: string): Pled
     createdAt: new Date(p.createdAt).toISOString(),
     blanketsLogged: c.logged,
     blanketsFinished: c.finished,
+    blanketsDeclined: c.declined,
     late: isPledgeLate({ status: p.status, dueDate: p.dueDate, quantity: p.quantity, blanketsFinished: c.finished }, today),
     afterDeadline: need ? p.dueDate > need.deadline : false,
     need:
@@ -142,7 +128,7 @@ export async function listPledges(actor: Actor, q: PledgeListQuery): Promise<Pag
 /** The pledge if this person may see it; someone else's is "not found" to a volunteer, never "forbidden". */
 export async function visiblePledge(actor: Actor, id: number, transaction?: Transaction): Promise<Pledge> {
   const p = await Pledge.findByPk(id, { transaction });
-  if (!p || (p.userId !== actor.id && !readsAll(actor))) throw notFound('That pledge');
+  if (!p || !maySee(actor, p.userId)) throw notFound('That pledge');
   return p;
 }
 
@@ -201,14 +187,16 @@ export async function updatePledge(actor: Actor, id: number, body: PledgeUpdate,
   checkVersion(body.version, p.version);
   if (p.status === 'cancelled') throw new HttpError(409, 'This pledge was cancelled; make a new one instead');
   const today = todayIso();
-  const counts = (await blanketCounts([p.id], transaction)).get(p.id) ?? { logged: 0, finished: 0 };
+  const counts = await pledgeTally(p.id, transaction);
 
   const currentNeedId = p.needId ?? null;
   const needId = body.needId !== undefined ? body.needId : currentNeedId;
   const sizeCategory = body.sizeCategory ?? p.sizeCategory;
   const retargeted = needId !== currentNeedId || sizeCategory !== p.sizeCategory;
-  if (retargeted && counts.logged > 0) {
-    throw fieldError(409, body.needId !== undefined ? 'needId' : 'sizeCategory', `You have logged ${counts.logged} blanket(s) under this pledge already; make a new pledge for a different need or size`);
+  // Declined blankets stay in the pledge's history, so they hold it to its need and size too.
+  const everLogged = counts.logged + counts.declined;
+  if (retargeted && everLogged > 0) {
+    throw fieldError(409, body.needId !== undefined ? 'needId' : 'sizeCategory', `You have logged ${everLogged} blanket(s) under this pledge already; make a new pledge for a different need or size`);
   }
   if (needId !== null && retargeted) {
     await openNeed(needId, sizeCategory, today, transaction);
@@ -224,7 +212,7 @@ export async function updatePledge(actor: Actor, id: number, body: PledgeUpdate,
   p.sizeCategory = sizeCategory;
   if (body.quantity !== undefined) p.quantity = body.quantity;
   if (body.dueDate !== undefined) p.dueDate = body.dueDate;
-  p.status = counts.finished >= p.quantity ? 'fulfilled' : 'active';
+  p.status = pledgeStatusFor(p.status, p.quantity, counts.finished);
   await p.save({ transaction });
   return pledgeView(p.id, transaction);
 }
@@ -232,8 +220,8 @@ export async function updatePledge(actor: Actor, id: number, body: PledgeUpdate,
 export async function cancelPledge(actor: Actor, id: number, transaction: Transaction): Promise<PledgeView> {
   const p = await ownPledge(actor, id, transaction);
   if (p.status === 'cancelled') return pledgeView(p.id, transaction);
-  const counts = (await blanketCounts([p.id], transaction)).get(p.id);
-  if (counts && counts.logged > 0) {
+  const counts = await pledgeTally(p.id, transaction);
+  if (counts.logged > 0) {
     throw new HttpError(
       409,
       `You have logged ${counts.logged} blanket(s) under this pledge, so it cannot be cancelled; reduce it to ${counts.logged} instead`,
@@ -250,8 +238,7 @@ export async function refreshPledgeStatus(pledgeId: number | null | undefined, t
   if (!pledgeId) return;
   const p = await Pledge.findByPk(pledgeId, { transaction });
   if (!p || p.status === 'cancelled') return;
-  const c = (await blanketCounts([p.id], transaction)).get(p.id) ?? { logged: 0, finished: 0 };
-  const next = c.finished >= p.quantity ? 'fulfilled' : 'active';
+  const next = pledgeStatusFor(p.status, p.quantity, (await pledgeTally(p.id, transaction)).finished);
   if (next !== p.status) {
     p.status = next;
     await p.save({ transaction });

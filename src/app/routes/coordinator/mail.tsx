@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Ban, CheckCircle2, ChevronLeft, ChevronRight, Inbox, Lock, RotateCw } from 'lucide-react';
+import { Ban, CheckCircle2, ChevronLeft, ChevronRight, Inbox, Lock, Paperclip, RotateCw } from 'lucide-react';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardTitle } from '@/components/ui/card';
 import { Badge, type Tone } from '@/components/ui/badge';
@@ -223,6 +223,22 @@ export default function MailPage() {
                 </p>
               )}
               <MailText text={open.text} />
+              {open.attachments && open.attachments.length > 0 && (
+                <ul aria-label="Attachments" className="mt-4 flex flex-wrap gap-2 border-t border-oat-200 pt-4">
+                  {open.attachments.map((a, i) => (
+                    <li key={i}>
+                      <a
+                        className="inline-flex items-center gap-2 rounded-xl border border-oat-300 px-3 py-2"
+                        download={a.filename}
+                        href={`data:${a.contentType};charset=utf-8,${encodeURIComponent(a.content)}`}
+                      >
+                        <Paperclip aria-hidden className="size-4" />
+                        {a.filename}
+                      </a>
+                    </li>
+                  ))}
+                </ul>
+              )}
             </Card>
           )}
         </div>

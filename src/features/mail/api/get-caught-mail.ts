@@ -10,6 +10,7 @@ export interface CaughtMail {
   to: string;
   subject: string;
   text: string;
+  attachments: Array<{ filename: string; contentType: string; content: string }> | null;
   receivedAt: string;
   /** Single-use links the server took out because the reader is not their addressee. */
   linksHidden: number;
