@@ -5,7 +5,9 @@ import * as m0002 from './migrations/0002-drive-data';
 import * as m0003 from './migrations/0003-measured-size';
 import * as m0010 from './migrations/0010-read-indexes';
 import * as m0020 from './migrations/0020-mail-retry-window';
+import * as m0050 from './migrations/0050-assignments';
 import * as m0060 from './migrations/0060-mail-attachments';
+import * as m0070 from './migrations/0070-delivery-runs';
 
 /**
  * Migrations are listed here in order rather than globbed, so the same list works under tsx, in
@@ -17,7 +19,9 @@ const migrations = [
   { name: '0003-measured-size', ...m0003 },
   { name: '0010-read-indexes', ...m0010 },
   { name: '0020-mail-retry-window', ...m0020 },
+  { name: '0050-assignments', ...m0050 },
   { name: '0060-mail-attachments', ...m0060 },
+  { name: '0070-delivery-runs', ...m0070 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

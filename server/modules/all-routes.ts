@@ -15,6 +15,8 @@ import { guidelineRoutes } from './guidelines/guidelines.router';
 import { pledgeRoutes } from './pledges/pledges.router';
 import { blanketRoutes } from './blankets/blankets.router';
 import { photoRoutes } from './photos/photos.router';
+import { assignmentRoutes } from './assignments/assignments.router';
+import { runRoutes } from './runs/runs.router';
 
 export interface RouteContext {
   sequelize: Sequelize;
@@ -25,7 +27,7 @@ export interface RouteContext {
 /** Every API route of the product, in one list; each area contributes its own. */
 export function allRoutes(ctx: RouteContext): RouteDef[] {
   return [
-    ...driveRoutes(),
+    ...driveRoutes(ctx.config),
     // Before any /api/blankets/:id route: it holds /api/blankets/tags and /api/blankets/by-code/:code.
     ...intakeRoutes({ sequelize: ctx.sequelize, publicUrl: ctx.config.publicUrl }),
     ...authRoutes({
@@ -45,5 +47,7 @@ export function allRoutes(ctx: RouteContext): RouteDef[] {
     ...pledgeRoutes(ctx.sequelize),
     ...blanketRoutes(ctx.sequelize),
     ...photoRoutes(ctx.sequelize, ctx.config),
+    ...assignmentRoutes(ctx.sequelize),
+    ...runRoutes({ sequelize: ctx.sequelize, exportDir: ctx.config.exportDir }),
   ];
 }

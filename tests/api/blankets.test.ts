@@ -358,6 +358,11 @@ async function moveTo(who: Client, id: number, status: string) {
     return who.post(`/api/blankets/${id}/intake`, { siteId: site.id, widthCm: b.widthCm, lengthCm: b.lengthCm });
   }
   if (status === 'checked') return who.post(`/api/blankets/${id}/inspection`, { checklist: ALL_GOOD, outcome: 'checked' });
+  if (status === 'assigned') {
+    const b = (await Blanket.findByPk(id))!;
+    const needId = (await Pledge.findByPk(b.pledgeId!))!.needId!;
+    return who.post('/api/assignments', { blanketId: id, needId });
+  }
   return who.patch(`/api/blankets/${id}`, { status });
 }
 
@@ -384,25 +389,25 @@ describe('PATCH /api/blankets/:id: status moves', () => {
       [organiser, 'received'],
       [organiser, 'checked'],
       [organiser, 'assigned'],
-      [organiser, 'packed'],
-      [coordinator, 'delivered'],
     ];
     for (const [who, status] of steps) {
       const res = await moveTo(who, b.id, status);
-      expect(res.status, `${status}: ${JSON.stringify(res.body)}`).toBe(200);
+      expect(res.status, `${status}: ${JSON.stringify(res.body)}`).toBe(status === 'assigned' ? 201 : 200);
       expect((await Blanket.findByPk(b.id))!.status).toBe(status);
     }
     const detail = (await vol.get(`/api/blankets/${b.id}`)).body.blanket as BlanketDetail;
-    const moves = detail.events.filter((e) => ['status', 'intake', 'inspection'].includes(e.kind));
+    const moves = detail.events.filter((e) => ['status', 'intake', 'inspection', 'assignment'].includes(e.kind));
     expect(moves.map((e) => [e.fromStatus, e.toStatus, e.actor?.name])).toEqual([
       ['in_progress', 'finished', 'Wren Calloway'],
       ['finished', 'booked', 'Wren Calloway'],
       ['booked', 'received', 'Odile Farrant'],
       ['received', 'checked', 'Odile Farrant'],
       ['checked', 'assigned', 'Odile Farrant'],
-      ['assigned', 'packed', 'Odile Farrant'],
-      ['packed', 'delivered', 'Cass Merriweather'],
     ]);
+    // Packing and delivering happen on a delivery run, which records the stop and box with the move.
+    const pack = await organiser.patch(`/api/blankets/${b.id}`, { status: 'packed' });
+    expect(pack.status).toBe(409);
+    expect(pack.body.error.message).toMatch(/delivery run/);
     expect(moves.every((e) => !Number.isNaN(Date.parse(e.createdAt)))).toBe(true);
     expect(detail.receivedAt).not.toBeNull();
   });
@@ -440,10 +445,8 @@ describe('PATCH /api/blankets/:id: status moves', () => {
     expect(own.body.error.message).toMatch(/organisers/);
     await moveTo(organiser, b.id, 'received');
     await moveTo(organiser, b.id, 'checked');
-    await organiser.patch(`/api/blankets/${b.id}`, { status: 'assigned' });
-    await organiser.patch(`/api/blankets/${b.id}`, { status: 'packed' });
-    expect((await organiser.patch(`/api/blankets/${b.id}`, { status: 'delivered' })).status).toBe(403);
-    expect((await Blanket.findByPk(b.id))!.status).toBe('packed');
+    await moveTo(organiser, b.id, 'assigned');
+    expect((await Blanket.findByPk(b.id))!.status).toBe('assigned');
   });
 
   it('books a drop-off at an open site, and refuses a site that does not exist', async () => {

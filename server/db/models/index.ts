@@ -14,6 +14,8 @@ import { initBlanket, Blanket } from './blanket';
 import { initBlanketEvent, BlanketEvent } from './blanket-event';
 import { initPhoto, Photo } from './photo';
 import { initPlan, Plan } from './plan';
+import { initAssignment, Assignment } from './assignment';
+import { initRuns, Run, RunStop, RunBlanket, Export } from './run';
 
 /**
  * Every model is initialised here and every association is declared here, in one place.
@@ -34,6 +36,8 @@ export function initModels(sequelize: Sequelize) {
   initBlanketEvent(sequelize);
   initPhoto(sequelize);
   initPlan(sequelize);
+  initAssignment(sequelize);
+  initRuns(sequelize);
 
   PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
@@ -64,4 +68,26 @@ export function initModels(sequelize: Sequelize) {
   BlanketEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   Blanket.hasMany(Photo, { foreignKey: 'blanketId', as: 'photos' });
   Photo.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+
+  Blanket.hasMany(Assignment, { foreignKey: 'blanketId', as: 'assignments' });
+  Assignment.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+  Need.hasMany(Assignment, { foreignKey: 'needId', as: 'assignments' });
+  Assignment.belongsTo(Need, { foreignKey: 'needId', as: 'need' });
+  Assignment.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
+  Assignment.belongsTo(Recipient, { foreignKey: 'priorRecipientId', as: 'priorRecipient' });
+  Assignment.belongsTo(User, { foreignKey: 'assignedById', as: 'assignedBy' });
+  Run.belongsTo(User, { foreignKey: 'driverId', as: 'driver' });
+  Run.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Run.belongsTo(Site, { foreignKey: 'startSiteId', as: 'startSite' });
+  Run.hasMany(RunStop, { foreignKey: 'runId', as: 'stops' });
+  RunStop.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
+  RunStop.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
+  RunStop.hasMany(RunBlanket, { foreignKey: 'stopId', as: 'items' });
+  RunBlanket.belongsTo(RunStop, { foreignKey: 'stopId', as: 'stop' });
+  RunBlanket.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
+  RunBlanket.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+  Blanket.hasOne(RunBlanket, { foreignKey: 'blanketId', as: 'runItem' });
+  Export.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Export.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
+  Export.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
 }

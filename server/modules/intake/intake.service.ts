@@ -248,6 +248,13 @@ export async function inspect(
     for (const [key, value] of Object.entries(input.corrections ?? {}) as Array<[keyof BlanketFields, unknown]>) {
       correctedFields[key] = { from: before[key], to: value };
     }
+    // The size on record once this inspection's corrections are kept: what the maker is told was measured.
+    const measuredAfter = sizeOnRecord({
+      widthCm: b.widthCm,
+      lengthCm: b.lengthCm,
+      measuredWidthCm: input.corrections?.widthCm ?? b.measuredWidthCm,
+      measuredLengthCm: input.corrections?.lengthCm ?? b.measuredLengthCm,
+    });
     const mail =
       input.outcome === 'needs_fix' && b.maker
         ? [
@@ -256,10 +263,13 @@ export async function inspect(
               ...blanketNeedsFixMail({
                 name: b.maker.name.split(/\s+/)[0] ?? b.maker.name,
                 code: b.code,
+                blanketId: b.id,
                 recipientName: check.recipient.name,
                 fixes,
                 note: input.fixNote,
-                appUrl: `${appUrl}/my/blankets`,
+                logged: { widthCm: b.widthCm, lengthCm: b.lengthCm },
+                measured: measuredAfter.measured ? measuredAfter : null,
+                appUrl,
               }),
             },
           ]
