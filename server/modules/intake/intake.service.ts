@@ -23,7 +23,7 @@ import {
   type InspectionBody,
   OUTCOME_LABELS,
 } from '@shared/schemas/intake';
-import { maySee, type Actor } from '../../auth/actor';
+import { maySee, readsAll, type Actor } from '../../auth/actor';
 import { checkAgainst, type CheckAnswer } from '../guidelines/guidelines.service';
 import { eventView } from '../blankets/blankets.service';
 
@@ -423,9 +423,12 @@ export async function tags(ids: number[], actor: Actor, appUrl: string): Promise
   const found = new Set(visible.map((b) => b.id));
   const missing = ids.filter((i) => !found.has(i));
   if (missing.length > 0) {
-    throw new HttpError(404, `ids: no blanket ${missing.join(', ')} that you can print a tag for`, [
-      { path: 'ids', message: `Not found: ${missing.join(', ')}` },
-    ]);
+    // Someone else's blanket reads the same as one that does not exist: nothing about it is given away.
+    const n = missing.length;
+    const which = n === 1 ? 'One of these blankets is' : `${n} of these blankets are`;
+    const where = readsAll(actor) ? 'no longer in the log' : 'not among yours';
+    const message = `${which} ${where}, so there is no tag to print for ${n === 1 ? 'it' : 'them'}. Choose blankets from ${readsAll(actor) ? 'the blanket list' : 'My blankets'} to print their tags.`;
+    throw new HttpError(404, message, [{ path: 'ids', message }]);
   }
   const byId = new Map(visible.map((b) => [b.id, b]));
   return Promise.all(
