@@ -115,6 +115,8 @@ export const api = {
   put: <T>(url: string, body?: unknown) => request<T>('PUT', url, body ?? {}),
   patch: <T>(url: string, body?: unknown) => request<T>('PATCH', url, body ?? {}),
   delete: <T>(url: string) => request<T>('DELETE', url),
+  /** DELETE with a body, for steps back that carry their reason. */
+  deleteWith: <T>(url: string, body: unknown) => request<T>('DELETE', url, body),
   upload,
 };
 
