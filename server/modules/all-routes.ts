@@ -27,7 +27,7 @@ export interface RouteContext {
 /** Every API route of the product, in one list; each area contributes its own. */
 export function allRoutes(ctx: RouteContext): RouteDef[] {
   return [
-    ...driveRoutes(),
+    ...driveRoutes(ctx.config),
     // Before any /api/blankets/:id route: it holds /api/blankets/tags and /api/blankets/by-code/:code.
     ...intakeRoutes({ sequelize: ctx.sequelize, publicUrl: ctx.config.publicUrl }),
     ...authRoutes({
