@@ -114,9 +114,7 @@ export const api = {
   post: <T>(url: string, body?: unknown) => request<T>('POST', url, body ?? {}),
   put: <T>(url: string, body?: unknown) => request<T>('PUT', url, body ?? {}),
   patch: <T>(url: string, body?: unknown) => request<T>('PATCH', url, body ?? {}),
-  delete: <T>(url: string) => request<T>('DELETE', url),
-  /** DELETE with a body, for steps back that carry their reason. */
-  deleteWith: <T>(url: string, body: unknown) => request<T>('DELETE', url, body),
+  delete: <T>(url: string, body?: unknown) => request<T>('DELETE', url, body),
   upload,
 };
 

@@ -26,11 +26,11 @@ async function send(runId: number, c: RunChange): Promise<RunView> {
       case 'pack':
         return api.post<{ run: RunView }>(`${base}/stops/${c.stopId}/packed`, { boxes: c.boxes ?? [] });
       case 'unpack':
-        return api.deleteWith<{ run: RunView }>(`${base}/stops/${c.stopId}/packed`, { reason: c.reason });
+        return api.delete<{ run: RunView }>(`${base}/stops/${c.stopId}/packed`, { reason: c.reason });
       case 'deliver':
         return api.post<{ run: RunView }>(`${base}/stops/${c.stopId}/delivered`, c.body);
       case 'undeliver':
-        return api.deleteWith<{ run: RunView }>(`${base}/stops/${c.stopId}/delivered`, { reason: c.reason });
+        return api.delete<{ run: RunView }>(`${base}/stops/${c.stopId}/delivered`, { reason: c.reason });
     }
   })();
   return res.run;
