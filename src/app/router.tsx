@@ -40,6 +40,7 @@ export const routes = [
   { path: 'recipients/:id', ...guarded(() => import('./routes/coordinator/recipients-detail'), ['organiser', 'coordinator']) },
   { path: 'sites', ...guarded(() => import('./routes/coordinator/sites'), ['coordinator']) },
   { path: 'organiser/intake', ...guarded(() => import('./routes/organiser/intake'), ['organiser', 'coordinator']) },
+  { path: 'organiser/assign', ...guarded(() => import('./routes/organiser/assign-board'), ['organiser', 'coordinator']) },
   { path: 'organiser/queue', ...guarded(() => import('./routes/organiser/intake-queue'), ['organiser', 'coordinator']) },
   { path: 'tags', ...guarded(() => import('./routes/organiser/tag-sheet')) },
   { path: 'planner', ...page(() => import('./routes/planner/planner-page')) },
@@ -50,6 +51,10 @@ export const routes = [
   { path: 'blankets/:id', ...guarded(() => import('./routes/volunteer/blanket-detail')) },
   { path: 'blankets/:id/edit', ...guarded(() => import('./routes/volunteer/edit-blanket')) },
   { path: 'all-blankets', ...guarded(() => import('./routes/organiser/all-blankets'), ['organiser', 'coordinator']) },
+  { path: 'runs', ...guarded(() => import('./routes/delivery/runs'), ['organiser', 'coordinator']) },
+  { path: 'runs/:id', ...guarded(() => import('./routes/delivery/run-detail'), ['organiser', 'coordinator']) },
+  { path: 'runs/:id/packing-sheet', ...guarded(() => import('./routes/delivery/packing-sheet'), ['organiser', 'coordinator']) },
+  { path: 'exports', ...guarded(() => import('./routes/delivery/exports'), ['organiser', 'coordinator']) },
   // Feature pages are added above this line.
   { path: '*', ...page(() => import('./routes/not-found')) },
 ];

@@ -15,7 +15,7 @@ import { rememberedSiteId } from '@/features/intake/components/receive-panel';
 import { categoryText } from '@/features/intake/components/blanket-summary';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { formatCm } from '@shared/guidelines/wording';
-import type { IntakeQueueItem } from '@shared/schemas/intake';
+import type { IntakeQueueItem } from '@shared/schemas/intake-views';
 import { pageCount } from '@shared/schemas/page';
 
 const localDay = (d = new Date()) => `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;

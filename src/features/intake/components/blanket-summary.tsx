@@ -1,7 +1,7 @@
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import { featureLabel, fibreLabel, formatCm, formatIn, yarnWeightName } from '@shared/guidelines/wording';
 import type { Feature, Fibre, SizeCategory } from '@shared/schemas/blanket';
-import type { IntakeBlanketView } from '@shared/schemas/intake';
+import type { IntakeBlanketView } from '@shared/schemas/intake-views';
 
 
 export const sizeText = (w: number, l: number) => `${formatCm(w)} × ${formatCm(l)} cm (about ${formatIn(w)} × ${formatIn(l)} in)`;
