@@ -180,22 +180,26 @@ export function PinMap({ pins, fallbackCentre, onPick, label, className }: PinMa
           <FitToPins pins={pins} fallback={fallbackCentre} />
           {onPick && <PickOnClick onPick={onPick} />}
           {numbered.map((p) => (
+            // Pins are labels, not buttons: two places in one building would otherwise be two targets
+            // on top of each other (WCAG 2.5.8). The name shows on hover and in the list below.
             <Marker
               key={p.id}
               position={[p.lat, p.lng]}
-              title={p.label}
-              alt={`${p.n}: ${p.label}`}
+              interactive={false}
+              keyboard={false}
               zIndexOffset={p.selected ? 1000 : 0}
               icon={divIcon({
                 className: cn('kl-pin', `kl-pin-${p.selected ? 'selected' : (p.kind ?? 'recipient')}`),
-                html: `<span data-testid="map-pin" data-label="${escapeHtml(p.label)}">${p.n}</span>`,
+                html: `<span data-testid="map-pin" title="${escapeHtml(`${p.n}: ${p.label}`)}">${p.n}</span>`,
                 iconSize: p.selected ? [34, 34] : [28, 28],
                 iconAnchor: p.selected ? [17, 17] : [14, 14],
               })}
             >
-              <Tooltip direction="top" offset={[0, -14]} permanent={p.selected}>
-                {p.label}
-              </Tooltip>
+              {p.selected && (
+                <Tooltip direction="top" offset={[0, -14]} permanent>
+                  {p.label}
+                </Tooltip>
+              )}
             </Marker>
           ))}
         </MapContainer>
