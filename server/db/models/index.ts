@@ -14,6 +14,7 @@ import { initBlanket, Blanket } from './blanket';
 import { initBlanketEvent, BlanketEvent } from './blanket-event';
 import { initPhoto, Photo } from './photo';
 import { initPlan, Plan } from './plan';
+import { Booking, BookingBlanket, initBooking } from './booking';
 
 /**
  * Every model is initialised here and every association is declared here, in one place.
@@ -34,6 +35,7 @@ export function initModels(sequelize: Sequelize) {
   initBlanketEvent(sequelize);
   initPhoto(sequelize);
   initPlan(sequelize);
+  initBooking(sequelize);
 
   PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
@@ -64,4 +66,11 @@ export function initModels(sequelize: Sequelize) {
   BlanketEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   Blanket.hasMany(Photo, { foreignKey: 'blanketId', as: 'photos' });
   Photo.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+
+  User.hasMany(Booking, { foreignKey: 'userId', as: 'bookings' });
+  Booking.belongsTo(User, { foreignKey: 'userId', as: 'maker' });
+  Site.hasMany(Booking, { foreignKey: 'siteId', as: 'bookings' });
+  Booking.belongsTo(Site, { foreignKey: 'siteId', as: 'site' });
+  Booking.belongsToMany(Blanket, { through: BookingBlanket, foreignKey: 'bookingId', otherKey: 'blanketId', as: 'blankets' });
+  Blanket.belongsToMany(Booking, { through: BookingBlanket, foreignKey: 'blanketId', otherKey: 'bookingId', as: 'bookings' });
 }

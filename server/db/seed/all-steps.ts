@@ -7,5 +7,7 @@ import './recipients';
 
 export {};
 import './volunteering';
+// Opening hours and the demo's bookings: after the blankets they book.
+import './drop-offs';
 // Photos last: they picture the blankets the steps above made.
 import './photos';
