@@ -67,6 +67,17 @@ const matrix: Record<string, Row> = {
   'POST /api/blankets/:id/intake': STAFF,
   'POST /api/blankets/:id/inspection': STAFF,
   'GET /api/intake/queue': STAFF,
+  'GET /api/drive/clock': PUBLIC,
+  'PUT /api/drive/clock': COORDINATOR,
+  'GET /api/sites/:id/slots': SIGNED_IN,
+  'GET /api/slots/soonest': SIGNED_IN,
+  'GET /api/bookings': SIGNED_IN,
+  'POST /api/bookings': SIGNED_IN,
+  'GET /api/bookings/reminders': SIGNED_IN,
+  'PUT /api/bookings/reminders': SIGNED_IN,
+  'GET /api/bookings/:id': SIGNED_IN,
+  'PATCH /api/bookings/:id': SIGNED_IN,
+  'DELETE /api/bookings/:id': SIGNED_IN,
 };
 
 const ROLES = ['anonymous', 'volunteer', 'organiser', 'coordinator'] as const;
