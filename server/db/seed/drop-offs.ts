@@ -51,12 +51,12 @@ addSeedStep(async (ctx) => {
     await site.save({ transaction });
   }
   const booked = await Blanket.findAll({ where: { status: 'booked' }, order: [['id', 'ASC']], transaction });
-  // One visit per maker; each to a different site in turn, from two days ahead.
+  // One visit per maker, at the site the demo already has them bound for, spread from two days ahead.
   const byMaker = new Map<number, Blanket[]>();
   for (const b of booked) byMaker.set(b.userId, [...(byMaker.get(b.userId) ?? []), b]);
   let i = 0;
   for (const blankets of byMaker.values()) {
-    const site = sites[i % sites.length];
+    const site = sites.find((x) => x.id === blankets[0].siteId) ?? sites[0];
     const slots = slotsBetween(
       { openingHours: site.openingHours ?? EMPTY_HOURS, closures: site.closures ?? [], slotMinutes: site.slotMinutes, slotCapacity: site.slotCapacity },
       zone,
