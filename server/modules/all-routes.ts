@@ -16,6 +16,7 @@ import { pledgeRoutes } from './pledges/pledges.router';
 import { blanketRoutes } from './blankets/blankets.router';
 import { photoRoutes } from './photos/photos.router';
 import { bookingRoutes } from './bookings/bookings.router';
+import { assignmentRoutes } from './assignments/assignments.router';
 
 export interface RouteContext {
   sequelize: Sequelize;
@@ -47,5 +48,6 @@ export function allRoutes(ctx: RouteContext): RouteDef[] {
     ...pledgeRoutes(ctx.sequelize),
     ...blanketRoutes(ctx.sequelize),
     ...photoRoutes(ctx.sequelize, ctx.config),
+    ...assignmentRoutes(ctx.sequelize),
   ];
 }

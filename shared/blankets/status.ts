@@ -29,7 +29,8 @@ export interface StatusMove {
   /**
    * The door the move comes through. Without one it is a bare status change on the blanket page;
    * 'intake': made only through the intake and inspection steps, which record the re-measure,
-   * the checklist and the guideline check that justify it. Other steps (assigning, booking, packing,
+   * the checklist and the guideline check that justify it. 'assignment': made only on the assignment
+   * board, which records the need, the recipient and who assigned it. Other steps (booking, packing,
    * delivering) claim their moves the same way once they record something of their own with them.
    */
   via?: Exclude<MoveChannel, 'plain'>;
@@ -58,7 +59,7 @@ export const STATUS_MOVES: readonly StatusMove[] = [
   // After a fix: either the organisers mend it on the spot, or the maker takes it home and books it again.
   { from: 'needs_fix', to: 'received', direction: 'forward', by: STAFF, action: 'Fixed: check it again', via: 'intake' },
   { from: 'needs_fix', to: 'finished', direction: 'forward', by: MAKER, action: 'I have fixed it at home' },
-  { from: 'checked', to: 'assigned', direction: 'forward', by: STAFF, action: 'Assign to a recipient' },
+  { from: 'checked', to: 'assigned', direction: 'forward', by: STAFF, action: 'Assign to a recipient', via: 'assignment' },
   { from: 'assigned', to: 'packed', direction: 'forward', by: STAFF, action: 'Mark as packed' },
   { from: 'packed', to: 'delivered', direction: 'forward', by: DELIVERY, action: 'Mark as delivered' },
 
@@ -67,7 +68,7 @@ export const STATUS_MOVES: readonly StatusMove[] = [
   { from: 'received', to: 'booked', direction: 'back', by: STAFF, action: 'Not received after all' },
   { from: 'checked', to: 'received', direction: 'back', by: STAFF, action: 'Check it again' },
   { from: 'declined', to: 'received', direction: 'back', by: STAFF, action: 'Reconsider' },
-  { from: 'assigned', to: 'checked', direction: 'back', by: STAFF, action: 'Unassign' },
+  { from: 'assigned', to: 'checked', direction: 'back', by: STAFF, action: 'Unassign', via: 'assignment' },
   { from: 'packed', to: 'assigned', direction: 'back', by: STAFF, action: 'Unpack' },
   { from: 'delivered', to: 'packed', direction: 'back', by: DELIVERY, action: 'Not delivered after all' },
 ];

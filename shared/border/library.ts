@@ -3,6 +3,8 @@
  * words. Multiples are the craft's "multiple of N plus M"; the other numbers are planning aids.
  */
 import { usToUkText } from '../sizing/stitch-names';
+import { CORNER_STITCHES } from './row-ends';
+import type { RoundMode } from './round';
 
 export type Difficulty = 1 | 2 | 3;
 
@@ -16,6 +18,13 @@ export interface BorderPattern {
   lead: number;
   /** 0-based stitch of the repeat that holds its centre (where a shell's dc go). */
   centre: number;
+  /**
+   * Foundation stitches worked into each corner stitch, when fitted edge by edge, where the pattern
+   * needs other than the usual 3 (CORNER_STITCHES): chosen so the corner stitches and the next edge's
+   * first stitch make one whole repeat, which puts a repeat on the corner. Worked by hand; no
+   * published source.
+   */
+  cornerStitches?: number;
   rounds: number;
   /** Depth each round adds, in cm, at the reference gauge. */
   depthPerRoundCm: number;
@@ -120,6 +129,8 @@ export const BORDER_LIBRARY: readonly BorderPattern[] = [
     offset: 1,
     lead: 1,
     centre: 2,
+    // 5 corner stitches + the next edge's first sc = one 6-stitch scallop, centred on the corner.
+    cornerStitches: 5,
     rounds: 1,
     depthPerRoundCm: 2.5,
     yarnFactor: 1.6,
@@ -184,6 +195,30 @@ export const BORDER_LIBRARY: readonly BorderPattern[] = [
       'in the same st, *sc in next st, 4-dc bobble in next st, sc in next 2 sts; rep from * around. Sl st in first sc to join. Fasten off.',
   },
 ];
+
+/**
+ * What the border engine needs to know of a library border. A border's own corner count serves
+ * fitting edge by edge, where each corner must hold a whole repeat; one continuous round keeps the
+ * usual 3 corner stitches and moves its first repeat to centre the corners instead.
+ */
+export function borderPlanOptions(
+  pattern: BorderPattern,
+  mode: RoundMode = 'per-edge',
+): {
+  multiple: number;
+  offset: number;
+  lead: number;
+  centre: number;
+  cornerStitches: number;
+} {
+  return {
+    multiple: pattern.multiple,
+    offset: pattern.offset,
+    lead: pattern.lead,
+    centre: pattern.centre,
+    cornerStitches: mode === 'per-edge' ? (pattern.cornerStitches ?? CORNER_STITCHES) : CORNER_STITCHES,
+  };
+}
 
 export function borderById(id: string): BorderPattern | undefined {
   return BORDER_LIBRARY.find((b) => b.id === id);

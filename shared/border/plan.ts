@@ -39,6 +39,11 @@ export interface PlanBorderInput {
   centre?: number;
   /** The foundation round's stitch, for the wording only. */
   foundationStitch?: string;
+  /**
+   * Foundation stitches worked into each corner stitch; default CORNER_STITCHES (3). A border whose
+   * repeat needs a wider corner to sit on it says so in the library (see BorderPattern.cornerStitches).
+   */
+  cornerStitches?: number;
 }
 
 export interface EdgePlan extends EdgeFit {
@@ -68,6 +73,8 @@ export interface BorderPlan {
     change: number;
     /** Repeats the simulation places around the round. */
     repeats: number;
+    /** Stitches no repeat covers: total − repeats × multiple. */
+    between: number;
     placements: RepeatPlacement[];
   };
   cornerReport: CornerReport[];
@@ -168,6 +175,8 @@ export function planBorder(input: PlanBorderInput): BorderPlan {
   const stitch = input.foundationStitch ?? 'hdc';
   checkWhole('multiple', multiple, 1);
   checkWhole('offset', offset, 0);
+  const cornerStitches = input.cornerStitches ?? CORNER_STITCHES;
+  checkWhole('cornerStitches', cornerStitches, 1);
   const lead = input.lead ?? Math.ceil(offset / 2);
   const centre = input.centre ?? Math.floor((multiple - 1) / 2);
   checkWhole('lead', lead, 0);
@@ -184,7 +193,7 @@ export function planBorder(input: PlanBorderInput): BorderPlan {
 
   let edges: Record<EdgeName, EdgePlan>;
   let change: number;
-  const before = roundTotal(counts);
+  const before = roundTotal(counts, cornerStitches);
   if (mode === 'per-edge') {
     // Opposite edges hold the same count, so fitting the top once and copying it to the bottom
     // is the same arithmetic and guarantees the maker gets the same instruction twice.
@@ -198,7 +207,7 @@ export function planBorder(input: PlanBorderInput): BorderPlan {
     };
     change = 2 * top.change + 2 * right.change;
   } else if (mode === 'continuous') {
-    const rf = fitRound(counts, multiple, strategy);
+    const rf = fitRound(counts, multiple, strategy, cornerStitches);
     change = rf.change;
     const edgeFit = (edge: EdgeName): EdgeFit => {
       const c = rf.edgeChanges[edge];
@@ -223,7 +232,7 @@ export function planBorder(input: PlanBorderInput): BorderPlan {
   const fitted = { top: edges.top.fitted, right: edges.right.fitted, bottom: edges.bottom.fitted, left: edges.left.fitted };
   // In one continuous round the maker may begin the first repeat wherever they like: begin it where
   // the most corners get a centred repeat (the usual start wins a tie), unless told to keep it.
-  const simulate = (l: number) => simulateRound(fitted, { multiple, mode, lead: l, centre });
+  const simulate = (l: number) => simulateRound(fitted, { multiple, mode, lead: l, centre, cornerStitches });
   const centredCorners = (r: ReturnType<typeof simulate>) => r.corners.filter((c) => c.centred).length;
   let leadUsed = lead;
   let sim = simulate(lead);
@@ -252,9 +261,12 @@ export function planBorder(input: PlanBorderInput): BorderPlan {
 
   const notes: string[] = [
     'Count the stitches of each edge from the corner where you begin working it.',
-    `Corners: work ${CORNER_STITCHES} ${stitch} into each corner stitch (${CORNER_COUNT * CORNER_STITCHES} corner stitches in all).`,
+    `Corners: work ${cornerStitches} ${stitch} into each corner stitch (${CORNER_COUNT * cornerStitches} corner stitches in all).`,
     mode === 'per-edge'
-      ? `Each edge holds a multiple of ${multiple} plus ${offset} between its corners; the round has ${sim.total} stitches and ${sim.repeats.length} repeats.`
+      ? `Each edge holds a multiple of ${multiple} plus ${offset} between its corners; the round has ${sim.total} stitches: ${plural(sim.repeats.length, 'repeat', 'repeats')}` +
+        (multiple === 1 || sim.between === 0
+          ? '.'
+          : ` of ${multiple} and ${plural(sim.between, 'stitch', 'stitches')} between them where no whole repeat fits (work those as the plain stitch between repeats).`)
       : `The whole round holds a multiple of ${multiple} (${sim.total} stitches, ${sim.repeats.length} repeats), so the last repeat closes onto the first.`,
     cornerSummary(sim.corners),
   ];
@@ -275,8 +287,8 @@ export function planBorder(input: PlanBorderInput): BorderPlan {
     lead: leadUsed,
     centre,
     edges,
-    corners: { perCorner: CORNER_STITCHES, total: CORNER_COUNT * CORNER_STITCHES },
-    round: { before, total: sim.total, change, repeats: sim.repeats.length, placements: sim.repeats },
+    corners: { perCorner: cornerStitches, total: CORNER_COUNT * cornerStitches },
+    round: { before, total: sim.total, change, repeats: sim.repeats.length, between: sim.between, placements: sim.repeats },
     cornerReport: sim.corners,
     sentences,
     notes,

@@ -129,6 +129,8 @@ export interface SimulationOptions {
 
 export interface RoundSimulation {
   total: number;
+  /** Stitches of the round that no repeat covers (corner stitches and edge ends between repeats). */
+  between: number;
   repeats: RepeatPlacement[];
   corners: CornerReport[];
 }
@@ -153,9 +155,10 @@ function segments(edges: EdgeCounts, cornerStitches: number): Segment[] {
 
 /**
  * Walk the round. Per-edge: the pattern starts afresh on each edge (lead stitches, then repeats
- * every N stitches) and keeps going into the following corner for as long as a repeat's centre
- * still falls inside that edge-plus-corner stretch; that is how the 3 corner stitches of a shell
- * border become one more shell. Continuous: the repeats simply follow one another all the way
+ * every N stitches) and keeps going into the following corner for as long as a whole repeat still
+ * fits before the next edge's first repeat; that is how the 3 corner stitches of a shell border
+ * (with the next edge's first sc) become one more shell. Corner stitches that no whole repeat
+ * covers stay between the repeats. Continuous: the repeats simply follow one another all the way
  * round from the lead.
  */
 export function simulateRound(edges: EdgeCounts, options: SimulationOptions): RoundSimulation {
@@ -165,6 +168,9 @@ export function simulateRound(edges: EdgeCounts, options: SimulationOptions): Ro
   if (!Number.isInteger(lead) || lead < 0) throw new RangeError(`lead must be a whole number of at least 0 (got ${lead})`);
   if (!Number.isInteger(centre) || centre < 0 || centre >= n) {
     throw new RangeError(`centre must be a whole number from 0 to ${n - 1} (got ${centre})`);
+  }
+  if (!Number.isInteger(cornerStitches) || cornerStitches < 1) {
+    throw new RangeError(`cornerStitches must be a whole number of at least 1 (got ${cornerStitches})`);
   }
   for (const edge of EDGE_ORDER) {
     if (!Number.isInteger(edges[edge]) || edges[edge] < 1) {
@@ -180,8 +186,11 @@ export function simulateRound(edges: EdgeCounts, options: SimulationOptions): Ro
   if (mode === 'per-edge') {
     for (const edge of EDGE_ORDER) {
       const seg = segs.find((s) => s.name === edge)!;
-      const stretch = edges[edge] + cornerStitches;
-      for (let offset = lead; offset + centre < stretch; offset += n) starts.push(seg.first + offset);
+      // A repeat may run on into the corner only while it ends before the next edge's own first
+      // repeat, which begins `lead` stitches into that edge: otherwise the two would share stitches
+      // and the round would hold more repeats than it has room for.
+      const room = edges[edge] + cornerStitches + lead;
+      for (let offset = lead; offset + n <= room; offset += n) starts.push(seg.first + offset);
     }
   } else if (mode === 'continuous') {
     const count = Math.floor(total / n);
@@ -207,5 +216,5 @@ export function simulateRound(edges: EdgeCounts, options: SimulationOptions): Ro
     return { corner: seg.name as CornerName, middleStitch: middle, centred: best === 0, offsetFromCentre: best };
   });
 
-  return { total, repeats, corners };
+  return { total, between: total - repeats.length * n, repeats, corners };
 }

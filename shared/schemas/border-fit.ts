@@ -9,6 +9,8 @@ export const MAX_EDGE_STITCHES = 2000;
 export const MAX_MULTIPLE = 60;
 export const MAX_OFFSET = 100;
 export const MAX_PATTERN_ROWS = 12;
+/** More than this in one corner stitch would ruffle whatever the border. */
+export const MAX_CORNER_STITCHES = 9;
 
 const wholeCount = (field: string, noun: 'stitches' | 'rows') =>
   z
@@ -68,6 +70,12 @@ export const BorderFitRequestSchema = z
       .number({ error: 'centre must be a number' })
       .int('centre must be a whole number')
       .min(0, 'centre must be 0 or more')
+      .optional(),
+    cornerStitches: z
+      .number({ error: 'cornerStitches must be a number' })
+      .int('cornerStitches must be a whole number')
+      .min(1, 'cornerStitches must be at least 1')
+      .max(MAX_CORNER_STITCHES, `cornerStitches must be at most ${MAX_CORNER_STITCHES}`)
       .optional(),
   })
   .superRefine((req, ctx) => {

@@ -78,8 +78,10 @@ export interface PledgeView {
   status: PledgeStatus;
   version: number;
   createdAt: string;
-  /** Blankets logged under it so far (any status). */
+  /** Blankets logged under it that take a place in it: any status but declined (shared/pledges/rules.ts). */
   blanketsLogged: number;
+  /** Blankets logged under it and declined at intake; each leaves a place for a replacement. */
+  blanketsDeclined: number;
   /** Of those, the ones the maker has finished (anything past in progress, except declined). */
   blanketsFinished: number;
   /** Past its date with blankets still to finish. */
@@ -151,12 +153,4 @@ export interface OpenNeed {
   /** The current user's own active pledges against this need. */
   myPledged: number;
   recipient: RecipientBrief;
-}
-
-/** Whether a pledge is past its date with blankets still to finish, on `today` (YYYY-MM-DD). */
-export function isPledgeLate(
-  p: { status: PledgeStatus; dueDate: string; quantity: number; blanketsFinished: number },
-  today: string,
-): boolean {
-  return p.status === 'active' && p.dueDate < today && p.blanketsFinished < p.quantity;
 }

@@ -360,6 +360,11 @@ async function moveTo(who: Client, id: number, status: string) {
   }
   if (status === 'checked') return who.post(`/api/blankets/${id}/inspection`, { checklist: ALL_GOOD, outcome: 'checked' });
   if (status === 'booked') return bookDropOff(who, id);
+  if (status === 'assigned') {
+    const b = (await Blanket.findByPk(id))!;
+    const needId = (await Pledge.findByPk(b.pledgeId!))!.needId!;
+    return who.post('/api/assignments', { blanketId: id, needId });
+  }
   return who.patch(`/api/blankets/${id}`, { status });
 }
 
@@ -397,11 +402,11 @@ describe('PATCH /api/blankets/:id: status moves', () => {
     ];
     for (const [who, status] of steps) {
       const res = await moveTo(who, b.id, status);
-      expect(res.status, `${status}: ${JSON.stringify(res.body)}`).toBe(status === 'booked' ? 201 : 200);
+      expect(res.status, `${status}: ${JSON.stringify(res.body)}`).toBe(status === 'booked' || status === 'assigned' ? 201 : 200);
       expect((await Blanket.findByPk(b.id))!.status).toBe(status);
     }
     const detail = (await vol.get(`/api/blankets/${b.id}`)).body.blanket as BlanketDetail;
-    const moves = detail.events.filter((e) => ['status', 'booking', 'intake', 'inspection'].includes(e.kind));
+    const moves = detail.events.filter((e) => ['status', 'booking', 'intake', 'inspection', 'assignment'].includes(e.kind));
     expect(moves.map((e) => [e.fromStatus, e.toStatus, e.actor?.name])).toEqual([
       ['in_progress', 'finished', 'Wren Calloway'],
       ['finished', 'booked', 'Wren Calloway'],
@@ -448,7 +453,7 @@ describe('PATCH /api/blankets/:id: status moves', () => {
     expect(own.body.error.message).toMatch(/organisers/);
     await moveTo(organiser, b.id, 'received');
     await moveTo(organiser, b.id, 'checked');
-    await organiser.patch(`/api/blankets/${b.id}`, { status: 'assigned' });
+    await moveTo(organiser, b.id, 'assigned');
     await organiser.patch(`/api/blankets/${b.id}`, { status: 'packed' });
     expect((await organiser.patch(`/api/blankets/${b.id}`, { status: 'delivered' })).status).toBe(403);
     expect((await Blanket.findByPk(b.id))!.status).toBe('packed');

@@ -78,6 +78,14 @@ const matrix: Record<string, Row> = {
   'GET /api/bookings/:id': SIGNED_IN,
   'PATCH /api/bookings/:id': SIGNED_IN,
   'DELETE /api/bookings/:id': SIGNED_IN,
+  'GET /api/assignments': STAFF,
+  'POST /api/assignments': STAFF,
+  'POST /api/assignments/batch': STAFF,
+  'PATCH /api/assignments/:id': STAFF,
+  'DELETE /api/assignments/:id': STAFF,
+  'GET /api/assignments/board/needs': STAFF,
+  'GET /api/assignments/board/waiting': STAFF,
+  'POST /api/matching/suggest': STAFF,
 };
 
 const ROLES = ['anonymous', 'volunteer', 'organiser', 'coordinator'] as const;

@@ -96,7 +96,8 @@ test('a signed-in volunteer saves a plan, sees it listed and loads it back', asy
   await expect(list).toContainText('Five-dc shell · 30 × 23 rows · top and bottom +3, sides +2');
 
   await page.getByRole('button', { name: 'Start again' }).click();
-  await expect(page.getByLabel('Stitches across')).toHaveValue('42');
+  // Starting again takes the counts the example swatch and size call for.
+  await expect(page.getByLabel('Stitches across')).toHaveValue('111');
   await page.getByRole('button', { name: 'Load Shell edge for the ward' }).click();
   await expect(page.getByText('Loaded your plan "Shell edge for the ward"')).toBeVisible();
   await expect(page.getByLabel('Stitches across')).toHaveValue('30');
@@ -116,4 +117,26 @@ test('one continuous round moves the first repeat so more corners get a centred 
   await expect(page.getByText(/Begin the first repeat after 2 stitches of the top edge rather than 1/)).toBeVisible();
   await expect(page.getByTestId('blanket-drawing').locator('[data-testid="corner-mark"][data-centred="true"]')).toHaveCount(4);
   await shot(page, 'planner-continuous');
+});
+
+test('the plan, the yarn estimate and the printed plan use the counts the swatch panel gives for 80 × 100 cm', async ({ page }) => {
+  await page.goto('/planner');
+  await expect(page.getByTestId('gauge-result')).toContainText('Start with 111 stitches and 103 rows');
+  await expect(page.getByLabel('Stitches across')).toHaveValue('111');
+  await expect(page.getByLabel('Rows', { exact: true })).toHaveValue('103');
+  await expect(page.getByTestId('counts-in-use')).toContainText('use these counts');
+  await expect(page.getByTestId('yarn-counts')).toContainText("For the plan's 111 stitches × 103 rows");
+
+  // Counts typed by the maker are kept, and the page says the size and yarn follow them, not the target.
+  await page.getByLabel('Stitches across').fill('42');
+  await expect(page.getByTestId('finished-size')).toContainText('Your plan uses your own counts');
+  await expect(page.getByTestId('yarn-counts')).toContainText("For the plan's 42 stitches × 103 rows");
+  await page.getByRole('button', { name: 'Use 111 stitches and 103 rows in the plan' }).click();
+  await expect(page.getByLabel('Stitches across')).toHaveValue('111');
+
+  await page.emulateMedia({ media: 'print' });
+  await expect(page.getByTestId('plan-headline')).toContainText('111 stitches across × 103 rows');
+  await expect(page.getByTestId('gauge-panel')).toContainText('Counts in this plan: 111 stitches × 103 rows, from the swatch and the target size');
+  await expect(page.getByTestId('yarn-counts')).toBeVisible();
+  await shot(page, 'planner-print');
 });

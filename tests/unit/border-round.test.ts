@@ -72,12 +72,23 @@ describe('simulateRound', () => {
     ]);
   });
 
-  it('wide scallop (6 plus 1), per edge: the corner scallop lands one stitch past the middle', () => {
+  it('wide scallop (6 plus 1), per edge, 3-stitch corners: no whole scallop fits a corner, so none is counted there', () => {
     const sim = simulateRound({ top: 31, right: 25, bottom: 31, left: 25 }, { multiple: 6, mode: 'per-edge', lead: 1, centre: 2 });
-    // Top: scallops centred at 4, 10, ..., 28 on the edge, then 34 = the corner's third stitch.
+    // Top: scallops centred at 4, 10, ..., 28; one begun at 32 would run into the right side's own first scallop.
     const top = sim.repeats.filter((r) => r.start <= 34);
-    expect(top.map((r) => r.centre)).toEqual([4, 10, 16, 22, 28, 34]);
-    expect(sim.corners[0]).toEqual({ corner: 'top-right', middleStitch: 33, centred: false, offsetFromCentre: 1 });
+    expect(top.map((r) => r.centre)).toEqual([4, 10, 16, 22, 28]);
+    expect(sim.repeats).toHaveLength(18);
+    expect(sim.between).toBe(sim.total - 18 * 6);
+    // Centres at 28 and 38 are both 5 away from the corner's middle stitch 33: a tie, reported as after.
+    expect(sim.corners[0]).toEqual({ corner: 'top-right', middleStitch: 33, centred: false, offsetFromCentre: 5 });
+  });
+
+  it('wide scallop (6 plus 1), per edge, 5-stitch corners: a scallop sits on every corner', () => {
+    const sim = simulateRound({ top: 31, right: 25, bottom: 31, left: 25 }, { multiple: 6, mode: 'per-edge', lead: 1, centre: 2, cornerStitches: 5 });
+    expect(sim.total).toBe(132);
+    expect(sim.repeats).toHaveLength(22);
+    expect(sim.between).toBe(0);
+    expect(sim.corners.every((c) => c.centred)).toBe(true);
   });
 
   it('continuous: repeats follow one another all the way round and close', () => {

@@ -1,14 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { layoutDrawing } from '../../src/features/planner/components/drawing-geometry';
-import { computePlanner, parsePatternText, toPlanInput, DEFAULTS, defaultDepth, type PlannerState } from '../../src/features/planner/hooks/use-planner';
+import { computePlanner, parsePatternText, toPlanInput, DEFAULTS, defaultDepth, initialPlannerState, followSwatch, countsInUse, type PlannerState } from '../../src/features/planner/hooks/use-planner';
+import { rowCount } from '@shared/border/row-ends';
 import { planBorder } from '@shared/border/plan';
-import { BORDER_LIBRARY, borderById } from '@shared/border/library';
+import { BORDER_LIBRARY, borderById, borderPlanOptions } from '@shared/border/library';
 import { EDGE_ORDER } from '@shared/border/round';
 import { PlanInputSchema } from '@shared/schemas/plan';
 
 const shell = borderById('five-dc-shell')!;
-const state = (patch: Partial<PlannerState> = {}): PlannerState => ({ ...DEFAULTS, borderDepth: defaultDepth(shell, 'cm'), depthTouched: false, ...patch });
+const state = (patch: Partial<PlannerState> = {}): PlannerState => ({ ...DEFAULTS, borderDepth: defaultDepth(shell, 'cm'), depthTouched: false, countsTouched: true, ...patch });
 
 describe('the planner screen state', () => {
   it('starts from our own example, not the check values of the border maths', () => {
@@ -79,7 +80,7 @@ describe('the blanket drawing', () => {
         fc.constantFrom('per-edge' as const, 'continuous' as const),
         fc.integer({ min: 260, max: 1200 }),
         (across, rows, border, strategy, mode, width) => {
-          const plan = planBorder({ across, rows, multiple: border.multiple, offset: border.offset, lead: border.lead, centre: border.centre, strategy, mode });
+          const plan = planBorder({ across, rows, ...borderPlanOptions(border, mode), strategy, mode });
           const d = layoutDrawing(plan, border, across, rows, rows, width);
           const f = d.foundation;
           const eps = 1e-6;
@@ -114,5 +115,34 @@ describe('the blanket drawing', () => {
     const d = layoutDrawing(plan, shell, 600, 20, 20, 640);
     expect(d.squeezed).toBe(true);
     expect(d.body.w / d.body.h).toBeCloseTo(5, 5);
+  });
+});
+
+describe('one set of counts for the plan, the swatch panel and the yarn estimate', () => {
+  it('80 × 100 cm at 15 sts and 11 rows per 10 cm: the plan and the yarn estimate use the 111 × 103 the swatch panel gives', () => {
+    const s = initialPlannerState();
+    const r = computePlanner(s);
+    expect(r.sizing).toMatchObject({ stitches: 111, rows: 103 });
+    expect([r.across, rowCount(r.rows!)]).toEqual([111, 103]);
+    // The yarn is worked out for the same body the swatch panel describes.
+    expect(r.sizes!.body.width).toBeCloseTo(r.sizing!.body.width, 6);
+    expect(r.sizes!.body.length).toBeCloseTo(r.sizing!.body.length, 6);
+    expect(countsInUse(s, r)).toEqual({ source: 'swatch', matchesSwatch: true });
+    // What the plan saves (and prints) carries those counts.
+    expect(toPlanInput(s, r)).toMatchObject({ across: 111 });
+  });
+
+  it('counts the maker typed are kept, said to be their own, and the yarn follows them', () => {
+    const s = followSwatch({ ...initialPlannerState(), across: '42', rows: '31', countsTouched: true });
+    const r = computePlanner(s);
+    expect(r.across).toBe(42);
+    expect(countsInUse(s, r)).toEqual({ source: 'own', matchesSwatch: false });
+    expect(r.sizes!.body.width).toBeLessThan(r.sizing!.body.width);
+  });
+
+  it('until the maker types counts, changing the swatch changes the plan', () => {
+    const s = followSwatch({ ...initialPlannerState(), gaugeStitches: '20' });
+    expect(computePlanner(s).across).toBe(computePlanner(s).sizing!.stitches);
+    expect(Number(s.across)).toBeGreaterThan(111);
   });
 });

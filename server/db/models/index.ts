@@ -15,6 +15,7 @@ import { initBlanketEvent, BlanketEvent } from './blanket-event';
 import { initPhoto, Photo } from './photo';
 import { initPlan, Plan } from './plan';
 import { Booking, BookingBlanket, initBooking } from './booking';
+import { initAssignment, Assignment } from './assignment';
 
 /**
  * Every model is initialised here and every association is declared here, in one place.
@@ -36,6 +37,7 @@ export function initModels(sequelize: Sequelize) {
   initPhoto(sequelize);
   initPlan(sequelize);
   initBooking(sequelize);
+  initAssignment(sequelize);
 
   PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
@@ -73,4 +75,11 @@ export function initModels(sequelize: Sequelize) {
   Booking.belongsTo(Site, { foreignKey: 'siteId', as: 'site' });
   Booking.belongsToMany(Blanket, { through: BookingBlanket, foreignKey: 'bookingId', otherKey: 'blanketId', as: 'blankets' });
   Blanket.belongsToMany(Booking, { through: BookingBlanket, foreignKey: 'blanketId', otherKey: 'bookingId', as: 'bookings' });
+  Blanket.hasMany(Assignment, { foreignKey: 'blanketId', as: 'assignments' });
+  Assignment.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+  Need.hasMany(Assignment, { foreignKey: 'needId', as: 'assignments' });
+  Assignment.belongsTo(Need, { foreignKey: 'needId', as: 'need' });
+  Assignment.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
+  Assignment.belongsTo(Recipient, { foreignKey: 'priorRecipientId', as: 'priorRecipient' });
+  Assignment.belongsTo(User, { foreignKey: 'assignedById', as: 'assignedBy' });
 }

@@ -9,5 +9,7 @@ export {};
 import './volunteering';
 // Opening hours and the demo's bookings: after the blankets they book.
 import './drop-offs';
+// Assignments after the blankets they place.
+import './assignments';
 // Photos last: they picture the blankets the steps above made.
 import './photos';

@@ -26,7 +26,8 @@ import { isIntakeMove, isMakerEditable, moveChannel, movesFrom } from '@shared/b
 import { moveBlanket } from './move-blanket';
 import { check, evaluate, type OtherRecipient } from '@shared/guidelines/check';
 import { activeRecipients, guidelinesOf, recipientBrief } from '../pledges/recipient-brief';
-import { refreshPledgeStatus } from '../pledges/pledges.service';
+import { pledgeTally, refreshPledgeStatus } from '../pledges/pledges.service';
+import { placesLeft } from '@shared/pledges/rules';
 import { uniqueBlanketCode } from './blanket-code';
 import type { Page } from '@shared/schemas/page';
 
@@ -238,8 +239,8 @@ export async function createBlanket(actor: Actor, body: BlanketCreate, transacti
   const pledge = await Pledge.findByPk(body.pledgeId, { include: [{ model: Need, as: 'need' }], transaction });
   if (!pledge || pledge.userId !== actor.id) throw fieldError(404, 'pledgeId', 'pledgeId: that pledge was not found among yours');
   if (pledge.status === 'cancelled') throw fieldError(409, 'pledgeId', 'pledgeId: that pledge was cancelled; choose another one');
-  const logged = await Blanket.count({ where: { pledgeId: pledge.id }, transaction });
-  if (logged >= pledge.quantity) {
+  const { logged } = await pledgeTally(pledge.id, transaction);
+  if (placesLeft(pledge.quantity, { logged }) === 0) {
     throw fieldError(
       409,
       'pledgeId',

@@ -1,4 +1,4 @@
-import { borderById, borderDepthCm } from '@shared/border/library';
+import { borderById, borderDepthCm, borderPlanOptions } from '@shared/border/library';
 import { planBorder } from '@shared/border/plan';
 import { rowCount } from '@shared/border/row-ends';
 import { EDGE_ORDER } from '@shared/border/round';
@@ -21,10 +21,7 @@ export function summarisePlan(input: PlanInput): PlanSummary {
   const plan = planBorder({
     across: input.across,
     rows: input.rows,
-    multiple: border.multiple,
-    offset: border.offset,
-    lead: border.lead,
-    centre: border.centre,
+    ...borderPlanOptions(border, input.mode),
     strategy: input.strategy,
     mode: input.mode,
   });

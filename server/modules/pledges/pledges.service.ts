@@ -8,44 +8,35 @@ import { HttpError, fieldError, notFound } from '../../lib/http-error';
 import { maySee, readsAll, type Actor } from '../../auth/actor';
 import {
   MAX_PLEDGE_DAYS_AHEAD,
-  isPledgeLate,
   type PledgeCreate,
   type PledgeListQuery,
   type PledgeSort,
   type PledgeUpdate,
   type PledgeView,
 } from '@shared/schemas/pledge';
-import type { BlanketStatus, SizeCategory } from '@shared/schemas/blanket';
+import type { SizeCategory } from '@shared/schemas/blanket';
 import { recipientBrief, todayIso, addDaysIso } from './recipient-brief';
-import { FINISHED_STATUSES } from '@shared/blankets/status';
+import { addToTally, emptyTally, isPledgeLate, pledgeStatusFor, type PledgeTally } from '@shared/pledges/rules';
 import type { Page } from '@shared/schemas/page';
 
 /** Kept here for callers written before the actor had its own home in server/auth/actor.ts. */
 export type { Actor } from '../../auth/actor';
 
-/** A blanket counts as finished once it has left the hook, unless intake turned it away. */
-const countsAsFinished = (s: BlanketStatus) => FINISHED_STATUSES.includes(s);
-
-interface BlanketCounts {
-  logged: number;
-  finished: number;
-}
-
-async function blanketCounts(pledgeIds: number[], transaction?: Transaction): Promise<Map<number, BlanketCounts>> {
-  const out = new Map<number, BlanketCounts>();
+async function blanketCounts(pledgeIds: number[], transaction?: Transaction): Promise<Map<number, PledgeTally>> {
+  const out = new Map<number, PledgeTally>();
   if (pledgeIds.length === 0) return out;
   const rows = await Blanket.findAll({
     attributes: ['pledgeId', 'status'],
     where: { pledgeId: { [Op.in]: pledgeIds } },
     transaction,
   });
-  for (const b of rows) {
-    const c = out.get(b.pledgeId!) ?? { logged: 0, finished: 0 };
-    c.logged += 1;
-    if (countsAsFinished(b.status)) c.finished += 1;
-    out.set(b.pledgeId!, c);
-  }
+  for (const b of rows) out.set(b.pledgeId!, addToTally(out.get(b.pledgeId!) ?? emptyTally(), b.status));
   return out;
+}
+
+/** The tally of one pledge's blankets. */
+export async function pledgeTally(pledgeId: number, transaction?: Transaction): Promise<PledgeTally> {
+  return (await blanketCounts([pledgeId], transaction)).get(pledgeId) ?? emptyTally();
 }
 
 const include = (transaction?: Transaction) => ({
@@ -56,8 +47,8 @@ const include = (transaction?: Transaction) => ({
   transaction,
 });
 
-function view(p: Pledge, counts: BlanketCounts | undefined, today: string): PledgeView {
-  const c = counts ?? { logged: 0, finished: 0 };
+function view(p: Pledge, counts: PledgeTally | undefined, today: string): PledgeView {
+  const c = counts ?? emptyTally();
   const need = p.need ?? null;
   const user = (p as Pledge & { user?: User }).user;
   return {
@@ -73,6 +64,7 @@ function view(p: Pledge, counts: BlanketCounts | undefined, today: string): Pled
     createdAt: new Date(p.createdAt).toISOString(),
     blanketsLogged: c.logged,
     blanketsFinished: c.finished,
+    blanketsDeclined: c.declined,
     late: isPledgeLate({ status: p.status, dueDate: p.dueDate, quantity: p.quantity, blanketsFinished: c.finished }, today),
     afterDeadline: need ? p.dueDate > need.deadline : false,
     need:
@@ -194,14 +186,16 @@ export async function updatePledge(actor: Actor, id: number, body: PledgeUpdate,
   checkVersion(body.version, p.version);
   if (p.status === 'cancelled') throw new HttpError(409, 'This pledge was cancelled; make a new one instead');
   const today = todayIso();
-  const counts = (await blanketCounts([p.id], transaction)).get(p.id) ?? { logged: 0, finished: 0 };
+  const counts = await pledgeTally(p.id, transaction);
 
   const currentNeedId = p.needId ?? null;
   const needId = body.needId !== undefined ? body.needId : currentNeedId;
   const sizeCategory = body.sizeCategory ?? p.sizeCategory;
   const retargeted = needId !== currentNeedId || sizeCategory !== p.sizeCategory;
-  if (retargeted && counts.logged > 0) {
-    throw fieldError(409, body.needId !== undefined ? 'needId' : 'sizeCategory', `You have logged ${counts.logged} blanket(s) under this pledge already; make a new pledge for a different need or size`);
+  // Declined blankets stay in the pledge's history, so they hold it to its need and size too.
+  const everLogged = counts.logged + counts.declined;
+  if (retargeted && everLogged > 0) {
+    throw fieldError(409, body.needId !== undefined ? 'needId' : 'sizeCategory', `You have logged ${everLogged} blanket(s) under this pledge already; make a new pledge for a different need or size`);
   }
   if (needId !== null && retargeted) {
     await openNeed(needId, sizeCategory, today, transaction);
@@ -217,7 +211,7 @@ export async function updatePledge(actor: Actor, id: number, body: PledgeUpdate,
   p.sizeCategory = sizeCategory;
   if (body.quantity !== undefined) p.quantity = body.quantity;
   if (body.dueDate !== undefined) p.dueDate = body.dueDate;
-  p.status = counts.finished >= p.quantity ? 'fulfilled' : 'active';
+  p.status = pledgeStatusFor(p.status, p.quantity, counts.finished);
   await p.save({ transaction });
   return pledgeView(p.id, transaction);
 }
@@ -225,8 +219,8 @@ export async function updatePledge(actor: Actor, id: number, body: PledgeUpdate,
 export async function cancelPledge(actor: Actor, id: number, transaction: Transaction): Promise<PledgeView> {
   const p = await ownPledge(actor, id, transaction);
   if (p.status === 'cancelled') return pledgeView(p.id, transaction);
-  const counts = (await blanketCounts([p.id], transaction)).get(p.id);
-  if (counts && counts.logged > 0) {
+  const counts = await pledgeTally(p.id, transaction);
+  if (counts.logged > 0) {
     throw new HttpError(
       409,
       `You have logged ${counts.logged} blanket(s) under this pledge, so it cannot be cancelled; reduce it to ${counts.logged} instead`,
@@ -243,8 +237,7 @@ export async function refreshPledgeStatus(pledgeId: number | null | undefined, t
   if (!pledgeId) return;
   const p = await Pledge.findByPk(pledgeId, { transaction });
   if (!p || p.status === 'cancelled') return;
-  const c = (await blanketCounts([p.id], transaction)).get(p.id) ?? { logged: 0, finished: 0 };
-  const next = c.finished >= p.quantity ? 'fulfilled' : 'active';
+  const next = pledgeStatusFor(p.status, p.quantity, (await pledgeTally(p.id, transaction)).finished);
   if (next !== p.status) {
     p.status = next;
     await p.save({ transaction });

@@ -28,6 +28,7 @@ export function borderFit(req: BorderFitRequest): BorderPlan {
       mode: req.mode,
       lead: req.lead,
       centre: req.centre,
+      cornerStitches: req.cornerStitches,
     }),
   );
 }

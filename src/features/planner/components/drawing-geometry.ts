@@ -1,6 +1,5 @@
 import type { BorderPlan } from '@shared/border/plan';
 import type { BorderPattern } from '@shared/border/library';
-import { CORNER_STITCHES } from '@shared/border/row-ends';
 import { CORNER_AFTER, EDGE_ORDER, type CornerName, type EdgeName } from '@shared/border/round';
 import { perStitch } from '@shared/border/spacing';
 
@@ -113,8 +112,8 @@ export function layoutDrawing(plan: BorderPlan, border: BorderPattern, bodyWidth
   for (const edge of EDGE_ORDER) {
     segs.push({ name: edge, first: next, count: plan.edges[edge].fitted, edge });
     next += plan.edges[edge].fitted;
-    segs.push({ name: CORNER_AFTER[edge], first: next, count: CORNER_STITCHES, corner: CORNER_AFTER[edge], after: edge });
-    next += CORNER_STITCHES;
+    segs.push({ name: CORNER_AFTER[edge], first: next, count: plan.corners.perCorner, corner: CORNER_AFTER[edge], after: edge });
+    next += plan.corners.perCorner;
   }
   const spacing = (edge: EdgeName) => length(edge) / plan.edges[edge].fitted;
   const nextEdge = (edge: EdgeName) => EDGE_ORDER[(EDGE_ORDER.indexOf(edge) + 1) % EDGE_ORDER.length]!;

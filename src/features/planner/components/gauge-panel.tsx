@@ -1,7 +1,9 @@
 import { Card, CardTitle } from '@/components/ui/card';
 import { Field, Input } from '@/components/ui/field';
 import { Button } from '@/components/ui/button';
-import type { FieldErrors, PlannerResult, PlannerState } from '../hooks/use-planner';
+import { Alert } from '@/components/ui/alert';
+import { rowCount } from '@shared/border/row-ends';
+import { countsInUse, type FieldErrors, type PlannerResult, type PlannerState } from '../hooks/use-planner';
 import { ChoiceGroup } from './choice-group';
 import { formatLength, inTerms } from './terms';
 
@@ -26,11 +28,14 @@ export function GaugePanel({ state, result, errors, update }: { state: PlannerSt
   const u = state.unit;
   const { sizing, sizes, pattern } = result;
   const rowMultiple = pattern?.length ?? 1;
+  const inUse = countsInUse(state, result);
+  const planRows = result.rows === undefined ? '?' : rowCount(result.rows);
   return (
     <Card className="break-inside-avoid" data-testid="gauge-panel">
       <CardTitle>Size from your swatch</CardTitle>
       <p className="hidden print:block">
         Swatch {state.gaugeStitches} stitches and {state.gaugeRows} rows per {per}; target {state.targetWidth} × {state.targetLength} {u}; border {state.borderDepth} {u} deep.
+        {result.across !== undefined && ` Counts in this plan: ${result.across} stitches × ${planRows} rows, ${inUse.matchesSwatch ? 'from the swatch and the target size' : 'the maker\'s own'}.`}
       </p>
       <div className="no-print space-y-5">
         <ChoiceGroup
@@ -88,20 +93,29 @@ export function GaugePanel({ state, result, errors, update }: { state: PlannerSt
             The swatch gives {sizing.exact.stitches.toFixed(1)} stitches and {sizing.exact.rows.toFixed(1)} rows, rounded to the nearest count that fits the body pattern
             {rowMultiple > 1 ? ` and a whole number of ${rowMultiple}-row repeats` : ''}.
           </p>
-          <Button variant="secondary" className="no-print" onClick={() => update({ across: String(sizing.stitches), rows: String(sizing.rows) })}>
-            Use {sizing.stitches} stitches and {sizing.rows} rows in the plan
-          </Button>
+          {inUse.matchesSwatch ? (
+            <p className="font-bold text-moss-700" data-testid="counts-in-use">
+              The plan, the drawing and the yarn estimate use these counts.
+            </p>
+          ) : (
+            <Button variant="secondary" className="no-print" onClick={() => update({ across: String(sizing.stitches), rows: String(sizing.rows), countsTouched: false })}>
+              Use {sizing.stitches} stitches and {sizing.rows} rows in the plan
+            </Button>
+          )}
         </div>
       ) : (
         <p className="mt-5 text-ink-soft">Fill in the swatch and the size to see the counts to start with.</p>
       )}
 
-      {sizes && (
-        <p className="mt-4" data-testid="finished-size">
-          <span className="font-bold">Your plan's counts</span> ({result.across} stitches × {result.rows && (typeof result.rows === 'number' ? result.rows : result.rows.count)} rows) at this
-          swatch: body {formatLength(sizes.body.width, u)} × {formatLength(sizes.body.length, u)}, finished about {formatLength(sizes.finished.width, u)} ×{' '}
-          {formatLength(sizes.finished.length, u)}.
-        </p>
+      {sizes && !inUse.matchesSwatch && (
+        <div className="mt-4" data-testid="finished-size">
+        <Alert kind="warning" title="Your plan uses your own counts">
+          The plan, the drawing and the yarn estimate use your {result.across} stitches × {planRows} rows. At this swatch that makes a body of{' '}
+          {formatLength(sizes.body.width, u)} × {formatLength(sizes.body.length, u)}, finished about {formatLength(sizes.finished.width, u)} ×{' '}
+          {formatLength(sizes.finished.length, u)}
+          {sizing ? `, not the ${state.targetWidth} × ${state.targetLength} ${u} above` : ''}.
+        </Alert>
+        </div>
       )}
     </Card>
   );

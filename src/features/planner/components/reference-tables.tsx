@@ -127,7 +127,7 @@ export function ReferenceTables({ terms }: { terms: Terms }) {
           </table>
         </div>
         <p className="text-sm text-ink-soft">
-          Corners: {CORNER_STITCHES} stitches into each corner stitch (common practice, no published source). Turning chains: {TURNING_CHAIN_SOURCE}.{' '}
+          Corners: {CORNER_STITCHES} stitches into each corner stitch (common practice, no published source); a border that needs a wider corner to sit a repeat on it says so in its plan. Turning chains: {TURNING_CHAIN_SOURCE}.{' '}
           {terms === 'uk' ? `Stitch names: ${US_UK_SOURCE}.` : ''}
         </p>
       </Section>

@@ -6,6 +6,7 @@ import { WORSTED_YARDS_PER_SQ_IN } from '@shared/sizing/yarn-estimate';
 import { yardsToMetres } from '@shared/sizing/units';
 import type { FieldErrors, PlannerResult, PlannerState } from '../hooks/use-planner';
 import { formatLength } from './terms';
+import { rowCount } from '@shared/border/row-ends';
 
 const n = (v: number) => Math.round(v).toLocaleString('en-GB');
 
@@ -65,8 +66,11 @@ export function YarnPanel({ state, result, errors, update }: { state: PlannerSta
             </p>
           )}
           <p>
-            Body {n(yardsToMetres(yarn.bodyYards))} m and border {n(yardsToMetres(yarn.borderYards))} m, then {Math.round(yarn.margin * 100)} % spare, rounded up. For a
-            body of {formatLength(sizes.body.width, sizes.body.unit)} × {formatLength(sizes.body.length, sizes.body.unit)} from your counts and swatch.
+            Body {n(yardsToMetres(yarn.bodyYards))} m and border {n(yardsToMetres(yarn.borderYards))} m, then {Math.round(yarn.margin * 100)} % spare, rounded up.
+          </p>
+          <p data-testid="yarn-counts">
+            For the plan's {result.across} stitches × {result.rows === undefined ? '?' : rowCount(result.rows)} rows: a body of{' '}
+            {formatLength(sizes.body.width, sizes.body.unit)} × {formatLength(sizes.body.length, sizes.body.unit)} at your swatch.
           </p>
           <Alert kind="info" title="A rule of thumb, not a measurement">
             Medium (#4) yarn uses about {WORSTED_YARDS_PER_SQ_IN} yd per square inch of sc, hdc or dc fabric, from one maker's published measurements. Other weights

@@ -1,5 +1,5 @@
 import { useCallback, useMemo, useState } from 'react';
-import { BORDER_LIBRARY, borderById, borderDepthCm, type BorderPattern } from '@shared/border/library';
+import { BORDER_LIBRARY, borderById, borderDepthCm, borderPlanOptions, type BorderPattern } from '@shared/border/library';
 import { planBorder, type BorderPlan } from '@shared/border/plan';
 import { rowCount, type BodyRows, type RowType } from '@shared/border/row-ends';
 import type { FitStrategy } from '@shared/border/fit';
@@ -53,7 +53,12 @@ export const DEFAULTS = {
   marginPct: '10',
 };
 
-export type PlannerState = typeof DEFAULTS & { borderDepth: string; depthTouched: boolean };
+/**
+ * countsTouched: until the maker types their own stitches across and rows, the plan takes the
+ * counts the swatch and the finished size call for, so the drawing, the yarn estimate and the
+ * printed plan all work from that one set of counts.
+ */
+export type PlannerState = typeof DEFAULTS & { borderDepth: string; depthTouched: boolean; countsTouched: boolean };
 
 /** The foundation round is about as deep as one plain hdc round: the library's own figure. */
 const FOUNDATION_DEPTH_CM = borderById('plain-hdc-round')!.depthPerRoundCm;
@@ -66,8 +71,25 @@ export function defaultDepth(border: BorderPattern, unit: LengthUnit): string {
   return asText(unit === 'cm' ? roundTo(cm, 0.5) : roundTo(fromCm(cm, unit), 0.25));
 }
 
-function initialState(): PlannerState {
-  return { ...DEFAULTS, borderDepth: defaultDepth(borderById(DEFAULTS.borderId)!, DEFAULTS.unit), depthTouched: false };
+/** While the maker has not typed counts of their own, take the ones the swatch and size call for. */
+export function followSwatch(s: PlannerState): PlannerState {
+  if (s.countsTouched) return s;
+  const { sizing } = computePlanner(s);
+  if (!sizing) return s;
+  const across = String(sizing.stitches);
+  const rows = String(sizing.rows);
+  return across === s.across && rows === s.rows ? s : { ...s, across, rows };
+}
+
+export function initialPlannerState(): PlannerState {
+  return followSwatch({ ...DEFAULTS, borderDepth: defaultDepth(borderById(DEFAULTS.borderId)!, DEFAULTS.unit), depthTouched: false, countsTouched: false });
+}
+
+/** Which counts the plan uses, in words for the screen and the printed plan. */
+export function countsInUse(s: PlannerState, r: PlannerResult): { source: 'swatch' | 'own' | 'none'; matchesSwatch: boolean } {
+  if (r.across === undefined || r.rows === undefined) return { source: 'none', matchesSwatch: false };
+  const matchesSwatch = !!r.sizing && r.sizing.stitches === r.across && r.sizing.rows === rowCount(r.rows);
+  return { source: !s.countsTouched && matchesSwatch ? 'swatch' : 'own', matchesSwatch };
 }
 
 /** A number typed by a person: blank stays blank (undefined) so the message can say "enter". */
@@ -164,10 +186,7 @@ export function computePlanner(s: PlannerState): PlannerResult {
       plan = planBorder({
         across,
         rows,
-        multiple: border.multiple,
-        offset: border.offset,
-        lead: border.lead,
-        centre: border.centre,
+        ...borderPlanOptions(border, s.mode),
         strategy: s.strategy,
         mode: s.mode,
       });
@@ -273,10 +292,12 @@ export function toPlanInput(s: PlannerState, r: PlannerResult): PlanInputDraft |
 }
 
 function fromPlanInput(input: PlanInput): PlannerState {
-  const base = initialState();
+  const base = initialPlannerState();
   const next: PlannerState = {
     ...base,
     across: String(input.across),
+    // A saved plan's counts are the maker's own: keep them even where the swatch would say otherwise.
+    countsTouched: true,
     borderId: input.borderId,
     strategy: input.strategy,
     mode: input.mode,
@@ -317,13 +338,14 @@ function fromPlanInput(input: PlanInput): PlannerState {
 }
 
 export function usePlanner() {
-  const [state, setState] = useState<PlannerState>(initialState);
+  const [state, setState] = useState<PlannerState>(initialPlannerState);
   const result = useMemo(() => computePlanner(state), [state]);
 
   const update = useCallback((patch: Partial<PlannerState>) => {
     setState((s) => {
       const next = { ...s, ...patch };
       if ('borderDepth' in patch) next.depthTouched = true;
+      if (('across' in patch || 'rows' in patch) && !('countsTouched' in patch)) next.countsTouched = true;
       // Until the maker types their own depth, it follows the chosen border.
       if (('borderId' in patch || 'unit' in patch) && !next.depthTouched) {
         next.borderDepth = defaultDepth(borderById(next.borderId) ?? BORDER_LIBRARY[0]!, next.unit);
@@ -338,12 +360,12 @@ export function usePlanner() {
         next.targetLength = conv(s.targetLength, step);
         if (next.depthTouched) next.borderDepth = conv(s.borderDepth, next.unit === 'cm' ? 0.5 : 0.25);
       }
-      return next;
+      return followSwatch(next);
     });
   }, []);
 
   const load = useCallback((input: PlanInput) => setState(fromPlanInput(input)), []);
-  const reset = useCallback(() => setState(initialState()), []);
+  const reset = useCallback(() => setState(initialPlannerState()), []);
 
   return { state, result, update, load, reset };
 }
