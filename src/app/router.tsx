@@ -48,6 +48,8 @@ export const routes = [
   { path: 'blankets', ...guarded(() => import('./routes/volunteer/my-blankets')) },
   { path: 'blankets/new', ...guarded(() => import('./routes/volunteer/log-blanket')) },
   { path: 'blankets/:id', ...guarded(() => import('./routes/volunteer/blanket-detail')) },
+  { path: 'drop-off', ...guarded(() => import('./routes/volunteer/drop-off')) },
+  { path: 'organiser/drop-offs', ...guarded(() => import('./routes/organiser/drop-off-day'), ['organiser', 'coordinator']) },
   { path: 'blankets/:id/edit', ...guarded(() => import('./routes/volunteer/edit-blanket')) },
   { path: 'all-blankets', ...guarded(() => import('./routes/organiser/all-blankets'), ['organiser', 'coordinator']) },
   // Feature pages are added above this line.

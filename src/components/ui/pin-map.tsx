@@ -22,6 +22,8 @@ interface PinMapProps {
   onPick?: (lat: number, lng: number) => void;
   label: string;
   className?: string;
+  /** When given, a click on a pin chooses it (the booking page picks a site this way). */
+  onSelect?: (id: string | number) => void;
 }
 
 function FitToPins({ pins, fallback }: { pins: MapPin[]; fallback: { lat: number; lng: number } }) {
@@ -64,7 +66,7 @@ const colours = {
  * Pins on a plain background. The drive runs offline-first and no tile server is reachable, so
  * the map shows where places are relative to each other, not the streets between them.
  */
-export function PinMap({ pins, fallbackCentre, onPick, label, className }: PinMapProps) {
+export function PinMap({ pins, fallbackCentre, onPick, label, className, onSelect }: PinMapProps) {
   return (
     <div className={cn('overflow-hidden rounded-2xl border-2 border-oat-300', className)} role="group" aria-label={label}>
       <MapContainer
@@ -85,10 +87,12 @@ export function PinMap({ pins, fallbackCentre, onPick, label, className }: PinMa
           const c = p.selected ? colours.selected : colours[p.kind ?? 'recipient'];
           return (
             <CircleMarker
-              key={p.id}
+              // A tooltip's permanence is fixed when it mounts, so a newly selected pin mounts anew.
+              key={`${p.id}:${p.selected ? 'on' : 'off'}`}
               center={[p.lat, p.lng]}
               radius={p.selected ? 11 : 8}
               pathOptions={{ color: c.stroke, fillColor: c.fill, fillOpacity: 0.9, weight: 3 }}
+              eventHandlers={onSelect ? { click: () => onSelect(p.id) } : undefined}
             >
               <Tooltip direction="top" offset={[0, -8]} permanent={p.selected}>
                 {p.label}
