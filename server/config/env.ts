@@ -28,6 +28,14 @@ export const EnvSchema = z.object({
   SCRYPT_LOG_N: z.coerce.number().int().min(10).max(20).default(17),
   LOGIN_MAX_FAILURES: z.coerce.number().int().min(1).max(1000).default(8),
   SERVE_CLIENT: bool.default(true),
+  /** A tile server for the maps, e.g. https://tiles.example.org/{z}/{x}/{y}.png; unset: the demo town's own basemap. */
+  TILE_URL: z
+    .string()
+    .url()
+    .refine((u) => ['{z}', '{x}', '{y}'].every((k) => u.includes(k)), 'TILE_URL must hold {z}, {x} and {y}')
+    .optional(),
+  /** The credit the tile server's terms ask for, shown on every map; required with TILE_URL. */
+  TILE_ATTRIBUTION: z.string().min(1).optional(),
 });
 
 export type Env = z.infer<typeof EnvSchema>;
@@ -51,6 +59,7 @@ export interface Config {
   scryptLogN: number;
   loginMaxFailures: number;
   serveClient: boolean;
+  tiles: { url: string; attribution: string } | null;
 }
 
 export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
@@ -60,6 +69,9 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
     throw new Error(`Kindloop cannot start, a setting is wrong:\n${lines.join('\n')}`);
   }
   const e = parsed.data;
+  if (e.TILE_URL && !e.TILE_ATTRIBUTION) {
+    throw new Error('Kindloop cannot start, a setting is wrong:\n  TILE_ATTRIBUTION: a tile server needs the credit its terms ask for');
+  }
   return {
     env: e.NODE_ENV,
     port: e.PORT,
@@ -79,5 +91,6 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
     scryptLogN: e.SCRYPT_LOG_N,
     loginMaxFailures: e.LOGIN_MAX_FAILURES,
     serveClient: e.SERVE_CLIENT,
+    tiles: e.TILE_URL && e.TILE_ATTRIBUTION ? { url: e.TILE_URL, attribution: e.TILE_ATTRIBUTION } : null,
   };
 }

@@ -1,3 +1,5 @@
+import { appLinks } from './links';
+
 /** Plain-text mail, written to be read on a phone by someone who isn't expecting us. */
 export function passwordResetMail(name: string, link: string, minutes: number) {
   return {
@@ -26,7 +28,7 @@ export function welcomeMail(name: string, appUrl: string) {
       'Thank you for joining the drive. You can see what the recipients need, pledge blankets,',
       'plan your border and log what you finish here:',
       '',
-      appUrl,
+      appLinks.home(appUrl),
       '',
       'Kindloop',
     ].join('\n'),
@@ -37,9 +39,13 @@ export function welcomeMail(name: string, appUrl: string) {
 export function blanketNeedsFixMail(opts: {
   name: string;
   code: string;
+  blanketId: number;
   recipientName: string | null;
   fixes: string[];
   note?: string;
+  /** The size as logged and as measured on the table, so the maker sees which one the check used. */
+  logged?: { widthCm: number; lengthCm: number };
+  measured?: { widthCm: number; lengthCm: number } | null;
   appUrl: string;
 }) {
   const lines = [
@@ -51,11 +57,16 @@ export function blanketNeedsFixMail(opts: {
     ...opts.fixes.map((f) => `- ${f}`),
   ];
   if (opts.note) lines.push('', `A note from the organiser: ${opts.note}`);
+  const m = opts.measured;
+  const l = opts.logged;
+  if (m && l && (m.widthCm !== l.widthCm || m.lengthCm !== l.lengthCm)) {
+    lines.push('', `We measured it at ${m.widthCm} × ${m.lengthCm} cm (you logged ${l.widthCm} × ${l.lengthCm} cm); the check used our measurement.`);
+  }
   lines.push(
     '',
-    'Once it is done, bring it back to any drop-off point. You can see it under My blankets:',
+    'Once it is done, bring it back to any drop-off point. Its page says the same and keeps it all in one place:',
     '',
-    opts.appUrl,
+    appLinks.blanket(opts.appUrl, opts.blanketId),
     '',
     'Kindloop',
   );

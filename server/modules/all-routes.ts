@@ -17,6 +17,7 @@ import { blanketRoutes } from './blankets/blankets.router';
 import { photoRoutes } from './photos/photos.router';
 import { bookingRoutes } from './bookings/bookings.router';
 import { assignmentRoutes } from './assignments/assignments.router';
+import { runRoutes } from './runs/runs.router';
 
 export interface RouteContext {
   sequelize: Sequelize;
@@ -27,7 +28,7 @@ export interface RouteContext {
 /** Every API route of the product, in one list; each area contributes its own. */
 export function allRoutes(ctx: RouteContext): RouteDef[] {
   return [
-    ...driveRoutes(),
+    ...driveRoutes(ctx.config),
     // Before any /api/blankets/:id route: it holds /api/blankets/tags and /api/blankets/by-code/:code.
     ...intakeRoutes({ sequelize: ctx.sequelize, publicUrl: ctx.config.publicUrl }),
     ...authRoutes({
@@ -49,5 +50,6 @@ export function allRoutes(ctx: RouteContext): RouteDef[] {
     ...blanketRoutes(ctx.sequelize),
     ...photoRoutes(ctx.sequelize, ctx.config),
     ...assignmentRoutes(ctx.sequelize),
+    ...runRoutes({ sequelize: ctx.sequelize, exportDir: ctx.config.exportDir }),
   ];
 }

@@ -60,8 +60,8 @@ export const STATUS_MOVES: readonly StatusMove[] = [
   { from: 'needs_fix', to: 'received', direction: 'forward', by: STAFF, action: 'Fixed: check it again', via: 'intake' },
   { from: 'needs_fix', to: 'finished', direction: 'forward', by: MAKER, action: 'I have fixed it at home' },
   { from: 'checked', to: 'assigned', direction: 'forward', by: STAFF, action: 'Assign to a recipient', via: 'assignment' },
-  { from: 'assigned', to: 'packed', direction: 'forward', by: STAFF, action: 'Mark as packed' },
-  { from: 'packed', to: 'delivered', direction: 'forward', by: DELIVERY, action: 'Mark as delivered' },
+  { from: 'assigned', to: 'packed', direction: 'forward', by: STAFF, action: 'Mark as packed', via: 'packing' },
+  { from: 'packed', to: 'delivered', direction: 'forward', by: DELIVERY, action: 'Mark as delivered', via: 'delivery' },
 
   { from: 'finished', to: 'in_progress', direction: 'back', by: MAKER, action: 'Back to in progress' },
   { from: 'booked', to: 'finished', direction: 'back', by: MAKER, action: 'Cancel the drop-off', via: 'booking' },
@@ -69,8 +69,8 @@ export const STATUS_MOVES: readonly StatusMove[] = [
   { from: 'checked', to: 'received', direction: 'back', by: STAFF, action: 'Check it again' },
   { from: 'declined', to: 'received', direction: 'back', by: STAFF, action: 'Reconsider' },
   { from: 'assigned', to: 'checked', direction: 'back', by: STAFF, action: 'Unassign', via: 'assignment' },
-  { from: 'packed', to: 'assigned', direction: 'back', by: STAFF, action: 'Unpack' },
-  { from: 'delivered', to: 'packed', direction: 'back', by: DELIVERY, action: 'Not delivered after all' },
+  { from: 'packed', to: 'assigned', direction: 'back', by: STAFF, action: 'Unpack', via: 'packing' },
+  { from: 'delivered', to: 'packed', direction: 'back', by: DELIVERY, action: 'Not delivered after all', via: 'delivery' },
 ];
 
 /** The main line the stepper shows; needs_fix and declined are side branches off "received". */

@@ -102,35 +102,56 @@ export function feasibility(b: Pick<MatchBlanket, 'fields'>, g: GuidelineSet): {
   return { ok: reasons.length === 0, reasons };
 }
 
+// The same few preference texts and colour lists are read for every pair: read each once.
+const prefCache = new Map<string, ReturnType<typeof readPreferences>>();
+const ownCache = new Map<string, Set<string>>();
+function remember<T>(cache: Map<string, T>, key: string, make: (k: string) => T): T {
+  let v = cache.get(key);
+  if (v === undefined) {
+    if (cache.size > 10_000) cache.clear();
+    cache.set(key, (v = make(key)));
+  }
+  return v;
+}
+
 const pct = (x: number) => `${Math.round(x * 100)}%`;
 
-export function pairCost(b: MatchBlanket, n: MatchNeed, today: Date): PairCost {
+/**
+ * The cost of a pair and, when `explain` is set, its reasons. The solver weighs every possible pair
+ * but only the chosen ones are shown, so the words are written only for those.
+ */
+export function pairCost(b: MatchBlanket, n: MatchNeed, today: Date, explain = true): PairCost {
   const reasons: string[] = [];
+  const say = (text: () => string) => {
+    if (explain) reasons.push(text());
+  };
   const { widthCm, lengthCm } = b.fields;
   const gap = sizeGap(widthCm, lengthCm, n.sizeCategory);
   const sizePts = Math.round(Math.min(gap, SIZE_CAP) * SIZE_WEIGHT);
-  const label = sizeCategoryRow(n.sizeCategory).label;
-  const size = `${Math.round(widthCm)} × ${Math.round(lengthCm)} cm`;
-  reasons.push(gap <= 0.1 ? `${size} is close to the ${label} size asked for` : `${size} is ${pct(gap)} off the ${label} size, within the unit's limits`);
+  say(() => {
+    const label = sizeCategoryRow(n.sizeCategory).label;
+    const size = `${Math.round(widthCm)} × ${Math.round(lengthCm)} cm`;
+    return gap <= 0.1 ? `${size} is close to the ${label} size asked for` : `${size} is ${pct(gap)} off the ${label} size, within the unit's limits`;
+  });
 
   const pledgePts = b.pledgedNeedId === n.id ? 0 : NOT_PLEDGED_HERE;
-  if (pledgePts === 0) reasons.push('Its maker pledged it for this need');
-  else if (b.pledgedNeedId === null) reasons.push('Pledged for wherever it is needed most');
+  if (pledgePts === 0) say(() => 'Its maker pledged it for this need');
+  else if (b.pledgedNeedId === null) say(() => 'Pledged for wherever it is needed most');
 
   const days = daysUntil(n.deadline, today);
   const urgencyPts = Math.round((Math.min(Math.max(days, 0), URGENCY_HORIZON_DAYS) / URGENCY_HORIZON_DAYS) * URGENCY_WEIGHT);
-  reasons.push(days < 0 ? `The need was due ${-days} days ago` : days <= 14 ? `The need is due soon (in ${days} days)` : `The need is due in ${days} days`);
+  say(() => (days < 0 ? `The need was due ${-days} days ago` : days <= 14 ? `The need is due soon (in ${days} days)` : `The need is due in ${days} days`));
 
-  const prefs = readPreferences(n.preferences);
-  const own = new Set(words(`${b.colours} ${b.bodyStitch}`));
+  const prefs = remember(prefCache, n.preferences ?? '', readPreferences);
+  const own = remember(ownCache, `${b.colours} ${b.bodyStitch}`, (t) => new Set(words(t)));
   const liked = prefs.wanted.filter((w) => own.has(w));
   const disliked = prefs.unwanted.filter((w) => own.has(w));
   let prefPts = 0;
   if (disliked.length > 0) {
     prefPts = PREFERENCE_MISS;
-    reasons.push(`The unit asked for no ${disliked.join(' or ')}`);
+    say(() => `The unit asked for no ${disliked.join(' or ')}`);
   } else if (liked.length > 0) {
-    reasons.push(`Matches the wish for ${liked.join(', ')}`);
+    say(() => `Matches the wish for ${liked.join(', ')}`);
   } else if (prefs.wanted.length > 0) {
     prefPts = PREFERENCE_MISS;
   }

@@ -108,7 +108,33 @@ export function solveMatching(problem: MatchProblem): MatchSolution {
     }
   };
 
-  for (let i0 = 0; i0 < n; i0++) {
+  // Warm start (the row reduction of Jonker & Volgenant): each row's potential is its cheapest
+  // cost, and a row whose cheapest column still has room takes it at once. Reduced costs stay ≥ 0
+  // and placed pairs stay at 0, so the search below starts from a valid, mostly placed state.
+  const waiting: number[] = [];
+  for (let i = 0; i < n; i++) {
+    let best = -1;
+    let bestCost = UNPLACED;
+    for (let k = start[i]!; k < start[i + 1]!; k++) {
+      const j = edgeCol[k]!;
+      const c = edgeCost[k]!;
+      if (c < bestCost || (c === bestCost && best >= 0 && members[best]!.length >= capacity[best]! && members[j]!.length < capacity[j]!)) {
+        bestCost = c;
+        best = j;
+      }
+    }
+    u[i] = bestCost;
+    const j = best < 0 ? DUMMY : best;
+    if (members[j]!.length < capacity[j]!) {
+      slot[i] = members[j]!.length;
+      members[j]!.push(i);
+      colOf[i] = j;
+    } else {
+      waiting.push(i);
+    }
+  }
+
+  for (const i0 of waiting) {
     relax(i0, 0);
     let end = -1;
     for (;;) {

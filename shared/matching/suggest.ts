@@ -30,7 +30,7 @@ export function suggestAssignments(blankets: readonly MatchBlanket[], needs: rea
     const edges: MatchEdge[] = [];
     open.forEach((n, col) => {
       if (!okFor.get(n.recipientId)) return;
-      const c = pairCost(b, n, today);
+      const c = pairCost(b, n, today, false);
       mine.set(col, c);
       edges.push({ col, cost: c.cost });
     });
@@ -46,7 +46,7 @@ export function suggestAssignments(blankets: readonly MatchBlanket[], needs: rea
     const col = solution.colOf[i]!;
     if (col >= 0) {
       const n = open[col]!;
-      const c = costs[i]!.get(col)!;
+      const c = pairCost(b, n, today);
       filled[col]! += 1;
       out.pairs.push({
         blanketId: b.id,

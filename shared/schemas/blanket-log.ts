@@ -185,7 +185,28 @@ export interface MoveView {
   action: string;
 }
 
+/**
+ * What the organisers found when they sent a blanket back for a fix or declined it, shown to its
+ * maker while that is where it stands, so the page says what to put right.
+ */
+export interface InspectionFindings {
+  outcome: 'needs_fix' | 'declined';
+  at: string;
+  /** The recipient it was checked against. */
+  recipientName: string | null;
+  /** What the table found: checklist items that were not so, then the guidelines it missed. */
+  findings: string[];
+  /** What the maker could do about it, one line each (the fix mail lists the same). */
+  fixes: string[];
+  /** The organiser's own words to the maker, if any. */
+  note: string | null;
+}
+
 export interface BlanketDetail extends BlanketSummary {
+  /** The size measured at the drop-off table, where it was; the self-check uses it over the logged one. */
+  measured: { widthCm: number; lengthCm: number } | null;
+  /** Set while the blanket needs a fix or was declined: what the organisers found and asked for. */
+  inspection: InspectionFindings | null;
   fibres: Fibre[];
   features: Feature[];
   bodyStitch: BodyStitch;
@@ -203,7 +224,7 @@ export interface BlanketDetail extends BlanketSummary {
   photos: PhotoView[];
   events: BlanketEventView[];
   recipient: RecipientBrief | null;
-  /** The recipient's guideline check on the logged fields; null when it has no recipient yet. */
+  /** The recipient's guideline check on the fields on record (the measured size where there is one); null when it has no recipient yet. */
   selfCheck: GuidelineCheckResult | null;
   /** Recipients whose guidelines it meets as it is, for a blanket pledged "wherever needed most". */
   fitsRecipients: Array<{ recipientId: number; name: string }>;

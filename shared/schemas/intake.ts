@@ -238,12 +238,15 @@ export function codeFromScan(input: string): string {
 
 export const MAX_TAGS_PER_SHEET = 60;
 
+/** Worded for the person who followed a broken or hand-edited tag-sheet link, not for a programmer. */
+const TAGS_CHOOSE = 'Choose the blankets to print tags for from My blankets or a blanket’s own page';
+
 export const TagsQuerySchema = z.object({
   ids: z
-    .string({ error: 'ids: list blanket ids separated by commas' })
-    .regex(/^\d+(,\d+)*$/, 'ids: list blanket ids separated by commas, e.g. 3,4,9')
+    .string({ error: TAGS_CHOOSE })
+    .regex(/^\d+(,\d+)*$/, TAGS_CHOOSE)
     .transform((s) => [...new Set(s.split(',').map(Number))])
-    .refine((a) => a.length <= MAX_TAGS_PER_SHEET, `ids: at most ${MAX_TAGS_PER_SHEET} tags per sheet`),
+    .refine((a) => a.length <= MAX_TAGS_PER_SHEET, `A sheet holds at most ${MAX_TAGS_PER_SHEET} tags; print the rest on a second sheet`),
 });
 
 export interface BlanketTag {

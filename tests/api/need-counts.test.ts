@@ -75,6 +75,29 @@ describe('one count per need, the same on every page', () => {
     expect(new Set(progress.recipients.map((r) => r.recipientId))).toEqual(new Set(open.map((n) => n.recipient.id)));
   });
 
+  it('shows a volunteer the same pledged figures on the recipient pages as on What\'s needed', async () => {
+    const open = (await vol.get('/api/needs')).body.needs as OpenNeed[];
+    const list = (await vol.get('/api/recipients')).body.recipients as RecipientView[];
+    for (const n of open) {
+      const page = ((await vol.get(`/api/recipients/${n.recipient.id}`)).body.recipient as RecipientView).needs.find((x) => x.id === n.id)!;
+      const row = list.find((r) => r.id === n.recipient.id)!.needs.find((x) => x.id === n.id)!;
+      expect(page.pledged, `recipient page, need ${n.id}`).toBe(n.pledged);
+      expect(row.pledged, `recipients list, need ${n.id}`).toBe(n.pledged);
+    }
+  });
+
+  it("counts the chart's blankets per status as the staff blanket list does", async () => {
+    const progress = (await organiser.get('/api/drive/progress')).body.progress as DriveProgress;
+    expect(progress.statuses.length).toBeGreaterThan(3);
+    for (const { status, count } of progress.statuses) {
+      const page = await organiser.get(`/api/blankets?status=${status}&pageSize=1`);
+      expect(page.status).toBe(200);
+      expect(page.body.total, status).toBe(count);
+    }
+    const all = await organiser.get('/api/blankets?pageSize=1');
+    expect(progress.statuses.reduce((n, s) => n + s.count, 0)).toBe(all.body.total);
+  });
+
   it("counts the children's ward's completed pledge on its recipient page as on What's needed", async () => {
     const ward = (await Recipient.findOne({ where: { kind: 'childrens-ward' } }))!;
     const need = (await Need.findOne({ where: { recipientId: ward.id, sizeCategory: 'child' } }))!;

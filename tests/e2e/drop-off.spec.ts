@@ -19,10 +19,8 @@ test('a maker books a drop-off on the map; the invitation arrives and the organi
 
   // Choose the yarn shop on the map: its pin carries the next free time.
   const map = page.getByRole('group', { name: 'Map of the drop-off sites; choose one' });
-  await expect(map.locator('path.leaflet-interactive')).toHaveCount(3);
-  const sites = (await (await page.request.get('/api/sites')).json()).sites as Array<{ id: number; name: string }>;
-  const shop = sites.findIndex((s) => s.name === 'Hollyhock Yarn Parlour');
-  await map.locator('path.leaflet-interactive').nth(shop).click();
+  await expect(map.getByTestId('map-pin')).toHaveCount(3);
+  await map.locator('[data-testid="map-pin"][data-label^="Hollyhock Yarn Parlour: next free"]').click();
   await expect(page.getByRole('button', { name: /Hollyhock Yarn Parlour/, pressed: true })).toBeVisible();
   const times = page.getByRole('list', { name: /^Times on / });
   const free = times.getByRole('button', { disabled: false }).first();

@@ -27,4 +27,11 @@ describe('configuration', () => {
     expect(loadConfig({ SEED_DEMO: 'no' }).seedDemo).toBe(false);
     expect(loadConfig({ SEED_DEMO: '1' }).seedDemo).toBe(true);
   });
+  it('draws the demo basemap unless a tile server is set, and a tile server needs its attribution', () => {
+    expect(loadConfig({}).tiles).toBeNull();
+    const url = 'https://tiles.example.org/{z}/{x}/{y}.png';
+    expect(loadConfig({ TILE_URL: url, TILE_ATTRIBUTION: 'Map data: Example Tiles' }).tiles).toEqual({ url, attribution: 'Map data: Example Tiles' });
+    expect(() => loadConfig({ TILE_URL: url })).toThrow(/TILE_ATTRIBUTION/);
+    expect(() => loadConfig({ TILE_URL: 'https://tiles.example.org/tile.png', TILE_ATTRIBUTION: 'x' })).toThrow(/TILE_URL/);
+  });
 });

@@ -16,6 +16,7 @@ import { initPhoto, Photo } from './photo';
 import { initPlan, Plan } from './plan';
 import { Booking, BookingBlanket, initBooking } from './booking';
 import { initAssignment, Assignment } from './assignment';
+import { initRuns, Run, RunStop, RunBlanket, Export } from './run';
 
 /**
  * Every model is initialised here and every association is declared here, in one place.
@@ -38,6 +39,7 @@ export function initModels(sequelize: Sequelize) {
   initPlan(sequelize);
   initBooking(sequelize);
   initAssignment(sequelize);
+  initRuns(sequelize);
 
   PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
@@ -82,4 +84,18 @@ export function initModels(sequelize: Sequelize) {
   Assignment.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
   Assignment.belongsTo(Recipient, { foreignKey: 'priorRecipientId', as: 'priorRecipient' });
   Assignment.belongsTo(User, { foreignKey: 'assignedById', as: 'assignedBy' });
+  Run.belongsTo(User, { foreignKey: 'driverId', as: 'driver' });
+  Run.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Run.belongsTo(Site, { foreignKey: 'startSiteId', as: 'startSite' });
+  Run.hasMany(RunStop, { foreignKey: 'runId', as: 'stops' });
+  RunStop.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
+  RunStop.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
+  RunStop.hasMany(RunBlanket, { foreignKey: 'stopId', as: 'items' });
+  RunBlanket.belongsTo(RunStop, { foreignKey: 'stopId', as: 'stop' });
+  RunBlanket.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
+  RunBlanket.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
+  Blanket.hasOne(RunBlanket, { foreignKey: 'blanketId', as: 'runItem' });
+  Export.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Export.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
+  Export.belongsTo(Recipient, { foreignKey: 'recipientId', as: 'recipient' });
 }

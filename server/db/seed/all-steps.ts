@@ -11,5 +11,7 @@ import './volunteering';
 import './drop-offs';
 // Assignments after the blankets they place.
 import './assignments';
+// Delivery runs take the assigned, packed and delivered blankets the steps above made.
+import './delivery';
 // Photos last: they picture the blankets the steps above made.
 import './photos';

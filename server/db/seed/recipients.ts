@@ -34,7 +34,7 @@ interface DemoRecipient {
   needs: Array<{ sizeCategory: SizeCategory; quantity: number; inDays: number; preferences: string | null }>;
 }
 
-const RECIPIENTS: DemoRecipient[] = [
+export const RECIPIENTS: DemoRecipient[] = [
   {
     name: 'Willow Newborn Unit, Thimbleford General',
     kind: 'neonatal-unit',
@@ -131,7 +131,7 @@ const RECIPIENTS: DemoRecipient[] = [
   },
 ];
 
-const SITES = [
+export const SITES = [
   {
     name: 'Thimbleford Library',
     address: '9 Quill Lane, Thimbleford',

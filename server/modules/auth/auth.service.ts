@@ -5,6 +5,7 @@ import { PasswordReset } from '../../db/models/password-reset';
 import { Session } from '../../db/models/session';
 import { enqueueMail } from '../../mail/outbox';
 import { passwordResetMail, welcomeMail } from '../../mail/templates';
+import { appLinks } from '../../mail/links';
 import { hashPassword } from '../../auth/password';
 import { HttpError } from '../../lib/http-error';
 
@@ -40,7 +41,7 @@ export async function requestPasswordReset(ctx: AuthContext, email: string) {
       { userId: user.id, tokenHash: sha256(token), expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000) },
       { transaction },
     );
-    const link = `${ctx.publicUrl}/reset-password?token=${token}`;
+    const link = appLinks.resetPassword(ctx.publicUrl, token);
     await enqueueMail({ to: user.email, ...passwordResetMail(user.name, link, RESET_MINUTES) }, transaction);
   });
 }

@@ -10,7 +10,8 @@ import { Site } from '../../db/models/site';
 import { User } from '../../db/models/user';
 import { HttpError, fieldError, notFound } from '../../lib/http-error';
 import { maySee, readsAll, type Actor } from '../../auth/actor';
-import { pickBlanketFields, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
+import { fieldsForCheck, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
+import { findingsOf } from '@shared/intake/findings';
 import {
   LOG_FIELDS,
   type BlanketCreate,
@@ -20,6 +21,7 @@ import {
   type BlanketSort,
   type BlanketSummary,
   type BlanketUpdate,
+  type InspectionFindings,
   type PhotoView,
 } from '@shared/schemas/blanket-log';
 import { isIntakeMove, isMakerEditable, moveChannel, movesFrom } from '@shared/blankets/status';
@@ -183,6 +185,36 @@ export function selfCheckOf(fields: BlanketFields, recipient: Recipient | null |
   return { selfCheck: null, fitsRecipients };
 }
 
+/** The shape an inspection's history entry keeps (see intake.service inspect()). */
+interface InspectionData {
+  outcome?: string;
+  checklist?: Record<string, boolean>;
+  check?: { recipientName?: string; reasons?: Array<{ message?: string }> };
+  fixes?: string[];
+  fixNote?: string | null;
+}
+
+/** While a blanket needs a fix or was declined, what the inspection that put it there found. */
+function findingsFrom(status: BlanketStatus, events: BlanketEventView[]): InspectionFindings | null {
+  if (status !== 'needs_fix' && status !== 'declined') return null;
+  const last = [...events].reverse().find((e) => e.toStatus === status);
+  if (!last) return null;
+  if (last.kind !== 'inspection') {
+    // A move made without the inspection form (older records, the demo's history) keeps only its reason.
+    return { outcome: status, at: last.createdAt, recipientName: null, findings: last.reason ? [last.reason] : [], fixes: [], note: null };
+  }
+  const data = (last.data ?? {}) as InspectionData;
+  const rules = (data.check?.reasons ?? []).map((r) => r.message).filter((m): m is string => typeof m === 'string');
+  return {
+    outcome: status,
+    at: last.createdAt,
+    recipientName: data.check?.recipientName ?? null,
+    findings: findingsOf(data.checklist, rules),
+    fixes: data.fixes ?? [],
+    note: data.fixNote ?? null,
+  };
+}
+
 export async function blanketDetail(actor: Actor, id: number, transaction?: Transaction): Promise<BlanketDetail> {
   await visibleBlanket(actor, id, transaction);
   const b = (await Blanket.findByPk(id, {
@@ -193,13 +225,16 @@ export async function blanketDetail(actor: Actor, id: number, transaction?: Tran
     transaction,
   })) as Loaded;
   const isMaker = b.userId === actor.id;
-  const { selfCheck, fitsRecipients } = selfCheckOf(pickBlanketFields(b), b.recipient, await activeRecipients(transaction));
+  // The check reads what is on record: the size measured at the table where it was measured.
+  const { selfCheck, fitsRecipients } = selfCheckOf(fieldsForCheck(b), b.recipient, await activeRecipients(transaction));
   const brief = b.recipient ? recipientBrief(b.recipient) : null;
   const events: BlanketEventView[] = [...(b.events ?? [])]
     .sort((x, y) => new Date(x.createdAt).getTime() - new Date(y.createdAt).getTime() || x.id - y.id)
     .map(eventView);
   return {
     ...summaryOf(b),
+    measured: b.measuredWidthCm != null && b.measuredLengthCm != null ? { widthCm: b.measuredWidthCm, lengthCm: b.measuredLengthCm } : null,
+    inspection: findingsFrom(b.status, events),
     fibres: b.fibres,
     features: b.features,
     bodyStitch: b.bodyStitch as BlanketDetail['bodyStitch'],

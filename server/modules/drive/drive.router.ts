@@ -1,9 +1,11 @@
 import { Drive } from '../../db/models/drive';
 import { User } from '../../db/models/user';
 import type { RouteDef } from '../route-table';
+import type { Config } from '../../config/env';
+import type { MapTilesResponse } from '@shared/schemas/map';
 import { driveProgress } from './progress.service';
 
-export function driveRoutes(): RouteDef[] {
+export function driveRoutes(config: Pick<Config, 'tiles'>): RouteDef[] {
   return [
     {
       method: 'get', path: '/api/drive', access: 'public', summary: 'The drive this site runs',
@@ -20,6 +22,15 @@ export function driveRoutes(): RouteDef[] {
       handlers: [
         async (_req, res) => {
           res.json({ progress: await driveProgress() });
+        },
+      ],
+    },
+    {
+      method: 'get', path: '/api/map', access: 'public', summary: "The maps' tile server and its attribution (TILE_URL), or null for the demo town's own basemap",
+      handlers: [
+        (_req, res) => {
+          const body: MapTilesResponse = { tiles: config.tiles };
+          res.json(body);
         },
       ],
     },

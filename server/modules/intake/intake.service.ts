@@ -23,7 +23,7 @@ import {
   type InspectionBody,
   OUTCOME_LABELS,
 } from '@shared/schemas/intake';
-import { maySee, type Actor } from '../../auth/actor';
+import { maySee, readsAll, type Actor } from '../../auth/actor';
 import { checkAgainst, type CheckAnswer } from '../guidelines/guidelines.service';
 import { eventView } from '../blankets/blankets.service';
 
@@ -248,6 +248,13 @@ export async function inspect(
     for (const [key, value] of Object.entries(input.corrections ?? {}) as Array<[keyof BlanketFields, unknown]>) {
       correctedFields[key] = { from: before[key], to: value };
     }
+    // The size on record once this inspection's corrections are kept: what the maker is told was measured.
+    const measuredAfter = sizeOnRecord({
+      widthCm: b.widthCm,
+      lengthCm: b.lengthCm,
+      measuredWidthCm: input.corrections?.widthCm ?? b.measuredWidthCm,
+      measuredLengthCm: input.corrections?.lengthCm ?? b.measuredLengthCm,
+    });
     const mail =
       input.outcome === 'needs_fix' && b.maker
         ? [
@@ -256,10 +263,13 @@ export async function inspect(
               ...blanketNeedsFixMail({
                 name: b.maker.name.split(/\s+/)[0] ?? b.maker.name,
                 code: b.code,
+                blanketId: b.id,
                 recipientName: check.recipient.name,
                 fixes,
                 note: input.fixNote,
-                appUrl: `${appUrl}/my/blankets`,
+                logged: { widthCm: b.widthCm, lengthCm: b.lengthCm },
+                measured: measuredAfter.measured ? measuredAfter : null,
+                appUrl,
               }),
             },
           ]
@@ -413,9 +423,12 @@ export async function tags(ids: number[], actor: Actor, appUrl: string): Promise
   const found = new Set(visible.map((b) => b.id));
   const missing = ids.filter((i) => !found.has(i));
   if (missing.length > 0) {
-    throw new HttpError(404, `ids: no blanket ${missing.join(', ')} that you can print a tag for`, [
-      { path: 'ids', message: `Not found: ${missing.join(', ')}` },
-    ]);
+    // Someone else's blanket reads the same as one that does not exist: nothing about it is given away.
+    const n = missing.length;
+    const which = n === 1 ? 'One of these blankets is' : `${n} of these blankets are`;
+    const where = readsAll(actor) ? 'no longer in the log' : 'not among yours';
+    const message = `${which} ${where}, so there is no tag to print for ${n === 1 ? 'it' : 'them'}. Choose blankets from ${readsAll(actor) ? 'the blanket list' : 'My blankets'} to print their tags.`;
+    throw new HttpError(404, message, [{ path: 'ids', message }]);
   }
   const byId = new Map(visible.map((b) => [b.id, b]));
   return Promise.all(

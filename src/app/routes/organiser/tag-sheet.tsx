@@ -5,9 +5,13 @@ import { Button } from '@/components/ui/button';
 import { Loading } from '@/components/ui/spinner';
 import { QueryError } from '@/components/ui/query-error';
 import { EmptyState } from '@/components/ui/empty-state';
+import { ApiError } from '@/lib/api-client';
 import { useTags } from '@/features/intake/api/get-tags';
 import { categoryText } from '@/features/intake/components/blanket-summary';
 import { formatCm, formatIn, isInfantPopulation } from '@shared/guidelines/wording';
+
+/** The field's own words where the server gave them, rather than the field name in front of them. */
+const wordedError = (e: Error) => (e instanceof ApiError && e.issues[0] ? new Error(e.issues[0].message) : e);
 
 const svgSrc = (svg: string) => `data:image/svg+xml;charset=utf-8,${encodeURIComponent(svg)}`;
 
@@ -34,12 +38,12 @@ export default function TagSheetPage() {
       </div>
       {ids.length === 0 ? (
         <EmptyState icon={Tag} title="No blankets chosen">
-          Choose blankets in the intake queue, or print a tag from a blanket's page.
+          Choose blankets on My blankets or in the intake queue, or print a tag from a blanket's own page.
         </EmptyState>
       ) : tags.isPending ? (
         <Loading />
       ) : tags.error ? (
-        <QueryError error={tags.error} />
+        <QueryError error={wordedError(tags.error)} title="We could not print these tags" />
       ) : (
         <ul className="tag-sheet grid grid-cols-1 gap-4 sm:grid-cols-2 lg:grid-cols-3 print:grid-cols-3 print:gap-0" aria-label="Tags">
           {tags.data.map((t) => (

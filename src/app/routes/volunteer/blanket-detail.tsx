@@ -1,6 +1,6 @@
 import { Link, useLocation, useParams } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
-import { CalendarClock, Pencil, Tag } from 'lucide-react';
+import { CalendarClock, Pencil, Printer, Tag } from 'lucide-react';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardTitle } from '@/components/ui/card';
 import { Alert } from '@/components/ui/alert';
@@ -18,6 +18,7 @@ import { StatusActions } from '@/features/blankets/components/status-actions';
 import { SelfCheckPanel } from '@/features/blankets/components/self-check-panel';
 import { PhotoGallery } from '@/features/blankets/components/photo-gallery';
 import { BlanketHistory } from '@/features/blankets/components/blanket-history';
+import { InspectionFindings } from '@/features/blankets/components/inspection-findings';
 import { BODY_STITCH_LABELS, sizeLabel, yarnWeightLabel } from '@/features/blankets/components/labels';
 import type { SelfCheck } from '@/features/blankets/hooks/use-self-check';
 import type { BlanketDetail } from '@shared/schemas/blanket-log';
@@ -34,7 +35,10 @@ const yes = (v: boolean) => (v ? 'Yes' : 'No');
 
 function Details({ b, isMaker }: { b: BlanketDetail; isMaker: boolean }) {
   const rows: Array<[string, string]> = [
-    ['Size', `${formatCm(b.widthCm)} × ${formatCm(b.lengthCm)} cm (about ${formatIn(b.widthCm)} × ${formatIn(b.lengthCm)} in)`],
+    [b.measured ? 'Size as logged' : 'Size', `${formatCm(b.widthCm)} × ${formatCm(b.lengthCm)} cm (about ${formatIn(b.widthCm)} × ${formatIn(b.lengthCm)} in)`],
+    ...(b.measured
+      ? ([['Measured at the table', `${formatCm(b.measured.widthCm)} × ${formatCm(b.measured.lengthCm)} cm (about ${formatIn(b.measured.widthCm)} × ${formatIn(b.measured.lengthCm)} in)`]] as Array<[string, string]>)
+      : []),
     ['Pledged as', sizeLabel(b.sizeCategory)],
     ['Yarn weight', yarnWeightLabel(b.yarnWeight)],
     ['Fibres', capitalise(joinWords(b.fibres.map(fibreLabel)))],
@@ -107,6 +111,11 @@ export default function BlanketDetailPage() {
               </ButtonLink>
             )}
             {isMaker && (
+              <ButtonLink to={`/tags?ids=${b.id}`} variant="secondary">
+                <Printer className="size-5" aria-hidden /> Print its tag
+              </ButtonLink>
+            )}
+            {isMaker && (
               <ButtonLink to="/blankets" variant="quiet">
                 All my blankets
               </ButtonLink>
@@ -117,7 +126,7 @@ export default function BlanketDetailPage() {
       {state.logged && (
         <Alert kind="success" title="Saved. Thank you!">
           <span className="flex items-center gap-2">
-            <Tag className="size-5" aria-hidden /> Write <strong className="font-mono text-lg" data-testid="new-code">{b.code}</strong> on its tag (or print tags from the <Link to="/tags">tag sheet</Link>), so the organisers can find it in the log.
+            <Tag className="size-5" aria-hidden /> Write <strong className="font-mono text-lg" data-testid="new-code">{b.code}</strong> on its tag (or use <Link to={`/tags?ids=${b.id}`}>Print its tag</Link>), so the organisers can find it in the log.
           </span>
         </Alert>
       )}
@@ -126,6 +135,8 @@ export default function BlanketDetailPage() {
           {state.photoError} You can add them again below.
         </Alert>
       )}
+
+      <InspectionFindings blanket={b} isMaker={isMaker} />
 
       <Card className="space-y-4">
         <div className="flex flex-wrap items-center gap-3">

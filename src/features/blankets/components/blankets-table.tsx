@@ -56,10 +56,31 @@ const columns = [
   }),
 ];
 
-function BlanketCard({ b }: { b: BlanketSummary }) {
+/** Blankets picked on the list for something done to several at once (printing their tags). */
+export interface Choosing {
+  chosen: ReadonlySet<number>;
+  toggle: (id: number) => void;
+  /** What choosing is for, in the checkbox's label: "Choose KL-7Q4M to print its tag". */
+  purpose: string;
+}
+
+function ChooseBox({ b, choosing }: { b: BlanketSummary; choosing: Choosing }) {
+  return (
+    <input
+      type="checkbox"
+      className="size-6 shrink-0 accent-heather-700"
+      checked={choosing.chosen.has(b.id)}
+      onChange={() => choosing.toggle(b.id)}
+      aria-label={`Choose ${b.code} ${choosing.purpose}`}
+    />
+  );
+}
+
+function BlanketCard({ b, choosing }: { b: BlanketSummary; choosing?: Choosing }) {
   return (
     <li className="rounded-2xl border border-oat-200 bg-white p-4 shadow-sm" data-testid="blanket-card">
       <div className="flex items-start gap-3">
+        {choosing && <ChooseBox b={b} choosing={choosing} />}
         {b.coverPhoto ? (
           <img src={b.coverPhoto.thumbUrl} alt="" className="size-20 shrink-0 rounded-xl object-cover" loading="lazy" />
         ) : (
@@ -114,9 +135,14 @@ function useSettled<T>(value: T, ms = 300): T {
  * mode): a maker's own (`mine`) or, for staff, the whole drive's. A table on wide screens, cards on
  * phones, both drawn from the same page of rows.
  */
-export function BlanketsTable({ mine, showMaker = false, empty }: { mine: boolean; showMaker?: boolean; empty: ReactNode }) {
+export function BlanketsTable({ mine, showMaker = false, empty, choosing }: { mine: boolean; showMaker?: boolean; empty: ReactNode; choosing?: Choosing }) {
   // Staff see everyone's blankets, so who made each one is a column of its own.
-  const visibleColumns = useMemo(() => (showMaker ? [columns[0]!, makerColumn, ...columns.slice(1)] : columns), [showMaker]);
+  const visibleColumns = useMemo(() => {
+    const base = showMaker ? [columns[0]!, makerColumn, ...columns.slice(1)] : columns;
+    if (!choosing) return base;
+    const choose = col.display({ id: 'choose', header: () => <span className="sr-only">Choose</span>, cell: (c) => <ChooseBox b={c.row.original} choosing={choosing} /> });
+    return [choose, ...base];
+  }, [showMaker, choosing]);
   const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);
   const [search, setSearch] = useState('');
   const [status, setStatus] = useState<BlanketStatus | ''>('');
@@ -227,7 +253,7 @@ export function BlanketsTable({ mine, showMaker = false, empty }: { mine: boolea
 
       <ul className="space-y-4 md:hidden">
         {rows.map((r) => (
-          <BlanketCard key={r.id} b={r.original} />
+          <BlanketCard key={r.id} b={r.original} choosing={choosing} />
         ))}
       </ul>
 

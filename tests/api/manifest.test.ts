@@ -1,0 +1,129 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { parse } from 'csv-parse/sync';
+import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
+import { Recipient } from '../../server/db/models/recipient';
+import { Site } from '../../server/db/models/site';
+import { User } from '../../server/db/models/user';
+import { MANIFEST_COLUMNS } from '../../server/modules/runs/manifest-format';
+import type { ExportView, RunView } from '@shared/schemas/run';
+import type { Page } from '@shared/schemas/page';
+import { assignedBlanket } from '../fixtures/runs';
+
+let t: TestApp;
+let coordinator: Client;
+let organiser: Client;
+let volunteer: Client;
+let run: RunView;
+let shelter: Recipient;
+
+/** supertest buffers text/csv as a string; keep the raw bytes to see the BOM and CRLFs. */
+const raw = (c: Client, url: string) =>
+  c.agent.get(url).buffer(true).parse((res, cb) => {
+    const chunks: Buffer[] = [];
+    res.on('data', (d: Buffer) => chunks.push(d));
+    res.on('end', () => cb(null, Buffer.concat(chunks)));
+  });
+
+beforeAll(async () => {
+  t = await makeTestApp();
+  coordinator = await signedIn(t.app, 'coordinator');
+  organiser = await signedIn(t.app, 'organiser');
+  volunteer = await signedIn(t.app, 'volunteer');
+  const maker = (await User.findOne({ where: { email: 'maren@example.org' } }))!;
+  const anonymousMaker = (await User.findOne({ where: { email: 'tobias@example.org' } }))!;
+  shelter = (await Recipient.findOne({ where: { kind: 'family-shelter' } }))!;
+  const site = (await Site.findOne())!;
+  // Names, colours and a recipient that a spreadsheet would take for formulas (OWASP CSV Injection).
+  await maker.update({ name: '@Mallory Formula' });
+  await shelter.update({ name: '+Harbour Lantern, "east" door' });
+  await assignedBlanket(maker.id, shelter.id, { colours: '=HYPERLINK("http://bad.example.org","x")' });
+  await assignedBlanket(anonymousMaker.id, shelter.id, { colours: '-2+3 stripes', labelName: 'anonymous' });
+  await assignedBlanket(maker.id, shelter.id, { colours: 'cream and moss' });
+  const res = await coordinator.post('/api/runs', { runDate: '2026-12-20', driverId: maker.id, startSiteId: site.id, recipientIds: [shelter.id] });
+  run = res.body.run;
+});
+afterAll(async () => t.close());
+
+describe('GET /api/runs/:id/manifest.csv', () => {
+  it('is RFC 4180 CSV with our columns, one row per blanket, parsed back by csv-parse', async () => {
+    const res = await raw(coordinator, `/api/runs/${run.id}/manifest.csv`);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toMatch(/^text\/csv; charset=utf-8/);
+    expect(res.headers['content-disposition']).toMatch(/attachment; filename="kindloop-run-\d+-2026-12-20-made-\d{4}-\d\d-\d\d-[0-9a-f]{6}\.csv"/);
+    expect(run.blanketCount).toBeGreaterThanOrEqual(3);
+    expect(res.headers['x-manifest-rows']).toBe(String(run.blanketCount));
+    const text = (res.body as Buffer).toString('utf8');
+    expect(text.charCodeAt(0)).not.toBe(0xfeff);
+    expect(text.endsWith('\r\n')).toBe(true);
+    const rows = parse(text) as string[][];
+    expect(rows[0]).toEqual([...MANIFEST_COLUMNS]);
+    expect(rows).toHaveLength(run.blanketCount + 1);
+    const col = (name: (typeof MANIFEST_COLUMNS)[number]) => MANIFEST_COLUMNS.indexOf(name);
+    for (const r of rows.slice(1)) {
+      expect(r[col('Run date')]).toBe('2026-12-20');
+      expect(r[col('Stop')]).toBe('1');
+      expect(r[col('Box')]).toBe('1');
+      expect(r[col('Blanket code')]).toMatch(/^KL-/);
+    }
+  });
+
+  it('makes formula cells inert (OWASP CSV Injection) and keeps plain text as it is', async () => {
+    const text = ((await raw(coordinator, `/api/runs/${run.id}/manifest.csv`)).body as Buffer).toString('utf8');
+    const rows = parse(text) as string[][];
+    const col = (name: (typeof MANIFEST_COLUMNS)[number]) => MANIFEST_COLUMNS.indexOf(name);
+    const colours = rows.slice(1).map((r) => r[col('Colours')]);
+    expect(colours).toContain(`'=HYPERLINK("http://bad.example.org","x")`);
+    expect(colours).toContain(`'-2+3 stripes`);
+    expect(colours).toContain('cream and moss');
+    expect(rows[1]![col('Recipient')]).toBe(`'+Harbour Lantern, "east" door`);
+    const makers = rows.slice(1).map((r) => r[col('Made by (as on the label)')]);
+    expect(makers).toContain("'@Mallory");
+    expect(makers).toContain('Anonymous');
+    // Nowhere does a cell begin with a formula character once parsed.
+    for (const r of rows.slice(1)) for (const v of r) expect(v).not.toMatch(/^[=+@\t\r\n\0]|^-(?!\d+(?:\.\d+)?$)/);
+  });
+
+  it('adds a UTF-8 BOM when asked, for spreadsheet programs', async () => {
+    const res = await raw(organiser, `/api/runs/${run.id}/manifest.csv?bom=true`);
+    expect(res.status).toBe(200);
+    const bytes = res.body as Buffer;
+    expect([...bytes.subarray(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
+  });
+
+  it('keeps each manifest in the export folder, lists it with size, rows and who made it, and sends it again byte for byte', async () => {
+    const first = await raw(coordinator, `/api/runs/${run.id}/manifest.csv?bom=1`);
+    const page = (await organiser.get('/api/exports?pageSize=100')).body as Page<ExportView>;
+    const name = /filename="([^"]+)"/.exec(first.headers['content-disposition'])![1]!;
+    const e = page.items.find((x) => x.fileName === name)!;
+    expect(e).toMatchObject({ kind: 'run', runId: run.id, rows: run.blanketCount, bom: true, bytes: (first.body as Buffer).length });
+    expect(e.createdBy?.name).toBe('Cass Merriweather');
+    expect(fs.readFileSync(path.join(t.config.exportDir, name))).toEqual(first.body);
+    const again = await raw(organiser, `/api/exports/${e.id}`);
+    expect(again.status).toBe(200);
+    expect(again.body).toEqual(first.body);
+    fs.rmSync(path.join(t.config.exportDir, name));
+    const gone = await organiser.get(`/api/exports/${e.id}`);
+    expect(gone.status).toBe(410);
+    expect(gone.body.error.message).toMatch(/make the manifest again/);
+  });
+
+  it('is for staff only: a volunteer gets 403, and a run that does not exist is 404', async () => {
+    expect((await volunteer.get(`/api/runs/${run.id}/manifest.csv`)).status).toBe(403);
+    expect((await volunteer.get('/api/exports')).status).toBe(403);
+    expect((await coordinator.get('/api/runs/999999/manifest.csv')).status).toBe(404);
+    expect((await coordinator.get(`/api/runs/${run.id}/manifest.csv?bom=perhaps`)).status).toBe(400);
+  });
+});
+
+describe('GET /api/recipients/:id/manifest.csv', () => {
+  it('lists everything given to the recipient, with its run where it has one', async () => {
+    const res = await raw(organiser, `/api/recipients/${shelter.id}/manifest.csv`);
+    expect(res.status).toBe(200);
+    const rows = parse((res.body as Buffer).toString('utf8')) as string[][];
+    expect(rows.length - 1).toBe(Number(res.headers['x-manifest-rows']));
+    expect(rows.length - 1).toBeGreaterThanOrEqual(3);
+    expect(rows.slice(1).filter((r) => r[0] === '2026-12-20')).toHaveLength(run.blanketCount);
+  });
+});

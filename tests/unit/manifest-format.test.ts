@@ -1,0 +1,75 @@
+import { describe, expect, it } from 'vitest';
+import { MANIFEST_COLUMNS, manifestRecord, neutralise, type ManifestSourceRow } from '../../server/modules/runs/manifest-format';
+
+const row = (over: Partial<ManifestSourceRow> = {}): ManifestSourceRow => ({
+  runDate: '2026-12-06',
+  position: 2,
+  recipient: 'Harbour Lantern Family Shelter',
+  address: '4 Quay Row, Thimbleford',
+  box: 3,
+  code: 'KL-ABCD',
+  widthCm: 80,
+  lengthCm: 100,
+  measuredWidthCm: 78,
+  measuredLengthCm: 101,
+  yarnWeight: 4,
+  fibres: '["acrylic","cotton"]',
+  colours: 'ocean blues',
+  features: '[]',
+  machineWashable: 1,
+  dryerSafe: 0,
+  smokeFree: 1,
+  petFree: 1,
+  labelName: 'first-name',
+  makerName: 'Maren Oakley',
+  checkedBy: 'Odile Farrant',
+  checkedAt: '2026-11-30 10:15:00.000 +00:00',
+  ...over,
+});
+
+describe('manifest rows', () => {
+  it('has one value per column, with the size on record in cm and inches', () => {
+    const r = manifestRecord(row());
+    expect(r).toHaveLength(MANIFEST_COLUMNS.length);
+    const at = (c: (typeof MANIFEST_COLUMNS)[number]) => r[MANIFEST_COLUMNS.indexOf(c)];
+    // The size re-measured at intake wins over the logged one.
+    expect(at('Width (cm)')).toBe(78);
+    expect(at('Length (cm)')).toBe(101);
+    // 1 in = 2.54 cm exactly (international yard and pound agreement, 1959): 78 / 2.54 = 30.7, 101 / 2.54 = 39.8.
+    expect(at('Width (in)')).toBe(30.7);
+    expect(at('Length (in)')).toBe(39.8);
+    expect(at('Fibres')).toBe('acrylic; cotton');
+    expect(at('Machine washable')).toBe('yes');
+    expect(at('Dryer safe')).toBe('no');
+    expect(at('Made by (as on the label)')).toBe('Maren');
+    expect(at('Checked on')).toBe('2026-11-30');
+    expect(at('Yarn weight')).toBe('4 (medium)');
+  });
+
+  it('says "Anonymous" where the maker chose it, and leaves run columns empty for a blanket on no run', () => {
+    const r = manifestRecord(row({ labelName: 'anonymous', runDate: null, position: null, box: null, checkedBy: null, checkedAt: null }));
+    expect(r[MANIFEST_COLUMNS.indexOf('Made by (as on the label)')]).toBe('Anonymous');
+    expect(r.slice(0, 2)).toEqual(['', '']);
+    expect(r[MANIFEST_COLUMNS.indexOf('Checked on')]).toBe('');
+  });
+});
+
+// OWASP CSV Injection page: cells beginning with =, +, -, @, tab, CR or LF (and NUL, ASVS 5.0 1.2.10) are neutralised.
+describe('neutralise (OWASP CSV Injection)', () => {
+  it.each([
+    ['=HYPERLINK("http://x.example.org","click")'],
+    ['+1+2'],
+    ['-2+3+cmd|" /C calc"!A0'],
+    ['@SUM(1,1)'],
+    ['\t=1'],
+    ['\r=1'],
+    ['\n=1'],
+    ['\0=1'],
+  ])('prefixes %j with a single quote', (cell) => {
+    expect(neutralise(cell)).toBe(`'${cell}`);
+  });
+
+  it.each([['-3'], ['-2.5'], ['+7'], ['plain text'], ['Matron = nice'], ['3-ply'], ['']])('leaves %j alone', (cell) => {
+    expect(neutralise(cell)).toBe(cell);
+  });
+});
