@@ -9,7 +9,7 @@ import { migrate } from './db/migrate';
 import { isEmpty, seedDemo } from './db/seed/demo';
 import './db/seed/all-steps';
 import { createApp } from './app';
-import { startMailCatcher } from './mail/catcher';
+import { catcherCredentials, startMailCatcher } from './mail/catcher';
 import { createTransport } from './mail/transport';
 import { startOutboxWorker } from './mail/worker';
 import { startReminderScheduler } from './modules/bookings/reminders';
@@ -37,11 +37,12 @@ async function main() {
     await seedDemo(sequelize, config.demoPassword, config.scryptLogN, new Date(), { uploadDir: config.uploadDir });
     console.log('Seeded the demo drive (accounts: volunteer@, organiser@, coordinator@example.org)');
   }
+  const credentials = catcherCredentials();
   if (!config.smtpUrl) {
-    await startMailCatcher(config.mailCatcherPort);
+    await startMailCatcher(config.mailCatcherPort, { sender: config.mailFrom, credentials });
     console.log(`Local mail catcher on 127.0.0.1:${config.mailCatcherPort} (read it on the Mail page as a coordinator)`);
   }
-  startOutboxWorker(createTransport(config.smtpUrl, config.mailCatcherPort), config.mailFrom);
+  startOutboxWorker(createTransport(config.smtpUrl, { port: config.mailCatcherPort, credentials }), config.mailFrom);
   startReminderScheduler({ sequelize, publicUrl: config.publicUrl });
 
   const app = createApp({

@@ -22,7 +22,8 @@ export const EnvSchema = z.object({
   SESSION_SECRET: z.string().min(32, 'SESSION_SECRET must be at least 32 characters').optional(),
   SESSION_IDLE_MINUTES: z.coerce.number().int().min(5).max(24 * 60).default(120),
   COOKIE_SECURE: bool.optional(),
-  DEMO_PASSWORD: z.string().min(8).default('knit-one-purl-two'),
+  // The demo accounts follow the same 15-character minimum as everyone's (shared/schemas/user.ts).
+  DEMO_PASSWORD: z.string().min(15).default('knit-one-purl-two'),
   SEED_DEMO: bool.default(true),
   /** log2 of scrypt's N. OWASP Password Storage Cheat Sheet: N=2^17, r=8, p=1. */
   SCRYPT_LOG_N: z.coerce.number().int().min(10).max(20).default(17),

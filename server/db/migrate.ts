@@ -4,6 +4,7 @@ import * as m0001 from './migrations/0001-foundation';
 import * as m0002 from './migrations/0002-drive-data';
 import * as m0003 from './migrations/0003-measured-size';
 import * as m0010 from './migrations/0010-read-indexes';
+import * as m0020 from './migrations/0020-mail-retry-window';
 import * as m0050 from './migrations/0050-assignments';
 import * as m0060 from './migrations/0060-mail-attachments';
 import * as m0061 from './migrations/0061-drop-off-bookings';
@@ -18,6 +19,7 @@ const migrations = [
   { name: '0002-drive-data', ...m0002 },
   { name: '0003-measured-size', ...m0003 },
   { name: '0010-read-indexes', ...m0010 },
+  { name: '0020-mail-retry-window', ...m0020 },
   { name: '0050-assignments', ...m0050 },
   { name: '0060-mail-attachments', ...m0060 },
   { name: '0061-drop-off-bookings', ...m0061 },

@@ -39,7 +39,7 @@ export function allRoutes(ctx: RouteContext): RouteDef[] {
       maxFailures: ctx.config.loginMaxFailures,
     }),
     ...userRoutes(),
-    ...mailRoutes(),
+    ...mailRoutes(ctx.sequelize),
     ...toolRoutes(),
     ...planRoutes(),
     ...recipientRoutes({ sequelize: ctx.sequelize }),

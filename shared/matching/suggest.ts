@@ -13,18 +13,23 @@ export function suggestAssignments(blankets: readonly MatchBlanket[], needs: rea
   const open = needs.filter((n) => n.open > 0);
   // One guideline check per (blanket, recipient): a recipient's needs share its guidelines.
   const fitsByRecipient = new Map<number, MatchNeed['guidelines']>();
-  for (const n of open) fitsByRecipient.set(n.recipientId, n.guidelines);
+  const nameOf = new Map<number, string>();
+  for (const n of open) {
+    fitsByRecipient.set(n.recipientId, n.guidelines);
+    nameOf.set(n.recipientId, n.recipientName);
+  }
 
   const costs: Array<Map<number, PairCost>> = [];
   const rows: MatchEdge[][] = [];
   const refusals: string[][] = [];
   for (const b of blankets) {
     const okFor = new Map<number, boolean>();
-    const why: string[] = [];
+    // For a blanket nobody takes, the recipient it misses by the fewest rules is the useful example.
+    let why: string[] = [];
     for (const [rid, g] of fitsByRecipient) {
       const f = feasibility(b, g);
       okFor.set(rid, f.ok);
-      if (!f.ok && why.length === 0) why.push(f.reasons[0]!);
+      if (!f.ok && (why.length === 0 || f.reasons.length < why.length - 1)) why = [nameOf.get(rid)!, ...f.reasons];
     }
     const mine = new Map<number, PairCost>();
     const edges: MatchEdge[] = [];
@@ -63,7 +68,7 @@ export function suggestAssignments(blankets: readonly MatchBlanket[], needs: rea
     const fitting = [...costs[i]!.keys()].map((k) => open[k]!);
     const reason =
       fitting.length === 0
-        ? `No open need takes it as it is${refusals[i]![0] ? `: ${refusals[i]![0]}` : ''}`
+        ? `No open need takes it as it is${refusals[i]!.length > 1 ? `. Nearest, ${refusals[i]![0]}: ${refusals[i]!.slice(1).join(' ')}` : ''}`
         : `Every need it fits is filled by other blankets: ${fitting
             .slice(0, 3)
             .map((n) => `${n.recipientName} (${sizeCategoryRow(n.sizeCategory).label})`)

@@ -6,11 +6,19 @@ export type Role = z.infer<typeof RoleSchema>;
 
 const email = z.string().trim().toLowerCase().email('Enter a valid e-mail address').max(254);
 
-/** NIST SP 800-63B (via OWASP Authentication Cheat Sheet): at least 8, allow at least 64, no composition rules. */
+/**
+ * NIST SP 800-63B-4 (August 2025), 3.1.1.2 Password Verifiers: where a password is the only factor, as
+ * here, at least 15 characters; allow at least 64; no composition rules; each Unicode code point
+ * counts as one character.
+ */
+export const PASSWORD_MIN_LENGTH = 15;
+export const PASSWORD_MAX_LENGTH = 128;
+const codePoints = (s: string) => [...s].length;
+
 export const PasswordSchema = z
   .string()
-  .min(8, 'Use at least 8 characters')
-  .max(128, 'Use at most 128 characters');
+  .refine((s) => codePoints(s) >= PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters; a few words in a row work well`)
+  .refine((s) => codePoints(s) <= PASSWORD_MAX_LENGTH, `Use at most ${PASSWORD_MAX_LENGTH} characters`);
 
 export const RegisterSchema = z.object({
   name: z.string().trim().min(1, 'Tell us your name').max(120),

@@ -40,6 +40,7 @@ export const routes = [
   { path: 'recipients/:id', ...guarded(() => import('./routes/coordinator/recipients-detail'), ['organiser', 'coordinator']) },
   { path: 'sites', ...guarded(() => import('./routes/coordinator/sites'), ['coordinator']) },
   { path: 'organiser/intake', ...guarded(() => import('./routes/organiser/intake'), ['organiser', 'coordinator']) },
+  { path: 'organiser/assign', ...guarded(() => import('./routes/organiser/assign-board'), ['organiser', 'coordinator']) },
   { path: 'organiser/queue', ...guarded(() => import('./routes/organiser/intake-queue'), ['organiser', 'coordinator']) },
   { path: 'tags', ...guarded(() => import('./routes/organiser/tag-sheet')) },
   { path: 'planner', ...page(() => import('./routes/planner/planner-page')) },

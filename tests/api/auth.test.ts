@@ -112,6 +112,16 @@ describe('registration', () => {
   });
 });
 
+/** Polls until `read` gives something, for work that continues after the answer was sent. */
+async function eventually<T>(read: () => Promise<T | null>, tries = 100): Promise<T> {
+  for (let i = 0; i < tries; i++) {
+    const v = await read();
+    if (v) return v;
+    await new Promise((r) => setTimeout(r, 20));
+  }
+  throw new Error('it never happened');
+}
+
 describe('password reset', () => {
   it('mails a single-use link that sets a new password and signs out old sessions', async () => {
     const old = await signedIn(t.app, 'tobias@example.org');
@@ -119,7 +129,8 @@ describe('password reset', () => {
     await c.refreshToken();
     const res = await c.post('/api/auth/password-reset', { email: 'tobias@example.org' });
     expect(res.status).toBe(202);
-    const mail = await MailMessage.findOne({ where: { to: 'tobias@example.org' }, order: [['id', 'DESC']] });
+    // The answer goes first; the link is written just after it.
+    const mail = await eventually(() => MailMessage.findOne({ where: { to: 'tobias@example.org' }, order: [['id', 'DESC']] }));
     const token = mail!.text.match(/token=([A-Za-z0-9_-]+)/)![1];
     const ok = await c.post('/api/auth/password-reset/confirm', { token, password: 'a brand new passphrase' });
     expect(ok.status).toBe(200);

@@ -4,7 +4,7 @@ import type { Transporter } from 'nodemailer';
 import { makeTestApp, type TestApp } from './test-app';
 import { enqueueMail } from '../../server/mail/outbox';
 import { deliverDue } from '../../server/mail/worker';
-import { startMailCatcher } from '../../server/mail/catcher';
+import { catcherCredentials, startMailCatcher } from '../../server/mail/catcher';
 import { createTransport } from '../../server/mail/transport';
 import { MailMessage } from '../../server/db/models/mail-message';
 import { CaughtMail } from '../../server/db/models/caught-mail';
@@ -38,7 +38,8 @@ describe('mail attachments', () => {
   });
 
   it('carries a calendar attachment through nodemailer to the catcher, byte for byte', async () => {
-    const server = await startMailCatcher(0);
+    const credentials = catcherCredentials();
+    const server = await startMailCatcher(0, { sender: 'Kindloop <no-reply@example.org>', credentials });
     const port = (server.server.address() as AddressInfo).port;
     try {
       await MailMessage.destroy({ where: {} });
@@ -48,7 +49,7 @@ describe('mail attachments', () => {
         text: 'The invitation is attached.',
         attachments: [{ filename: 'drop-off.ics', contentType: 'text/calendar; charset=utf-8; method=REQUEST', content: calendar }],
       });
-      expect((await deliverDue(createTransport(undefined, port), 'Kindloop <no-reply@example.org>')).sent).toBe(1);
+      expect((await deliverDue(createTransport(undefined, { port, credentials }), 'Kindloop <no-reply@example.org>')).sent).toBe(1);
       const caught = await CaughtMail.findOne({ where: { subject: 'Drop-off booked' } });
       expect(caught?.attachments).toHaveLength(1);
       expect(caught?.attachments?.[0]).toMatchObject({ filename: 'drop-off.ics', content: calendar });

@@ -1,7 +1,8 @@
 import type { MailAttachment } from '../../mail/attachment';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { MailStatus } from '@shared/schemas/mail';
 
-export type MailStatus = 'pending' | 'sent' | 'failed';
+export type { MailStatus };
 
 /** The transactional outbox: a row is written with the change that causes it and sent later by the worker. */
 export class MailMessage extends Model<InferAttributes<MailMessage>, InferCreationAttributes<MailMessage>> {
@@ -14,6 +15,9 @@ export class MailMessage extends Model<InferAttributes<MailMessage>, InferCreati
   declare status: CreationOptional<MailStatus>;
   declare attempts: CreationOptional<number>;
   declare nextAttemptAt: CreationOptional<Date>;
+  /** After this the worker stops trying on its own and the message waits for a coordinator. */
+  declare retryUntil: CreationOptional<Date | null>;
+  declare givenUpAt: CreationOptional<Date | null>;
   declare lastError: CreationOptional<string | null>;
   declare sentAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
@@ -32,6 +36,8 @@ export function initMailMessage(sequelize: Sequelize) {
       status: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'pending' },
       attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       nextAttemptAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+      retryUntil: { type: DataTypes.DATE, allowNull: true },
+      givenUpAt: { type: DataTypes.DATE, allowNull: true },
       lastError: { type: DataTypes.TEXT, allowNull: true },
       sentAt: { type: DataTypes.DATE, allowNull: true },
       createdAt: DataTypes.DATE,

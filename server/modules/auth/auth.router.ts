@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
 import type { PassportStatic } from 'passport';
-import rateLimit from 'express-rate-limit';
+import rateLimit, { ipKeyGenerator } from 'express-rate-limit';
 import {
   LoginSchema,
   PasswordResetConfirmSchema,
@@ -21,27 +21,60 @@ function logIn(req: Parameters<RequestHandler>[0], user: Express.User): Promise<
   return new Promise((resolve, reject) => req.logIn(user, (e) => (e ? reject(e) : resolve())));
 }
 
+const HOUR = 60 * 60_000;
+const emailOf = (req: Parameters<RequestHandler>[0]) => String(req.body?.email ?? '').trim().toLowerCase();
+/** The client's network address as a limiter key (an IPv6 client by its /56, so it cannot rotate addresses). */
+const addressOf = (req: Parameters<RequestHandler>[0]) => ipKeyGenerator(req.ip ?? '');
+
+const limiter = (opts: Parameters<typeof rateLimit>[0] & { message: string }) =>
+  rateLimit({ standardHeaders: 'draft-8', legacyHeaders: false, ...opts, message: { error: { message: opts.message, issues: [] } } });
+
+/**
+ * Sign-in, reset and registration limits (docs/decisions/0009-sign-in-throttling.md). Failed sign-ins
+ * count per account and network address together (OWASP Authentication Cheat Sheet, "Login
+ * Throttling"), so someone guessing a maker's password slows only their own attempts: the maker,
+ * from their own address, still gets in. A second, looser count per address alone caps one client
+ * trying many accounts. Resets are limited the same two ways, registrations per network address.
+ */
+export function authLimits(maxFailures: number) {
+  const signInMessage = 'Too many failed sign-ins from here; wait a few minutes and try again';
+  return {
+    signInPerAddress: limiter({
+      windowMs: 15 * 60_000, limit: maxFailures * 3, skipSuccessfulRequests: true, message: signInMessage,
+      keyGenerator: (req) => `sign-in:${addressOf(req)}`,
+    }),
+    signInPerAccountAndAddress: limiter({
+      windowMs: 15 * 60_000, limit: maxFailures, skipSuccessfulRequests: true, message: signInMessage,
+      keyGenerator: (req) => `sign-in:${emailOf(req)}|${addressOf(req)}`,
+    }),
+    resetPerAddress: limiter({
+      windowMs: 15 * 60_000, limit: 10, message: 'Too many reset requests from here; wait a few minutes and try again',
+      keyGenerator: (req) => `reset:${addressOf(req)}`,
+    }),
+    resetPerAccountAndAddress: limiter({
+      windowMs: 15 * 60_000, limit: 3, message: 'You asked for a reset link for this address a moment ago; check the inbox, or wait a few minutes',
+      keyGenerator: (req) => `reset:${emailOf(req)}|${addressOf(req)}`,
+    }),
+    confirmPerAddress: limiter({
+      windowMs: 15 * 60_000, limit: 10, message: 'Too many tries from here; wait a few minutes and try again',
+      keyGenerator: (req) => `reset-confirm:${addressOf(req)}`,
+    }),
+    // A 409 tells whether an address has an account, so refusals are what is counted; 20 a window
+    // lets a double-clicked form or a small race through, and a venue's shared network signs up freely.
+    registerFailuresPerAddress: limiter({
+      windowMs: HOUR, limit: 20, skipSuccessfulRequests: true,
+      message: 'Too many sign-up attempts from here; wait a while, or sign in if you already have an account',
+      keyGenerator: (req) => `register-failed:${addressOf(req)}`,
+    }),
+    registerPerAddress: limiter({
+      windowMs: HOUR, limit: 100, message: 'Too many new accounts from here in the last hour; try again later',
+      keyGenerator: (req) => `register:${addressOf(req)}`,
+    }),
+  };
+}
+
 export function authRoutes(ctx: service.AuthContext & { passport: PassportStatic; maxFailures: number }): RouteDef[] {
-  const limitMessage = { error: { message: 'Too many failed sign-ins; wait a few minutes and try again', issues: [] } };
-  // Failures are counted per address and per account; a successful sign-in doesn't count.
-  const perAddress = rateLimit({
-    windowMs: 15 * 60_000,
-    limit: ctx.maxFailures * 3,
-    skipSuccessfulRequests: true,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    message: limitMessage,
-  });
-  const perAccount = rateLimit({
-    windowMs: 15 * 60_000,
-    limit: ctx.maxFailures,
-    skipSuccessfulRequests: true,
-    keyGenerator: (req) => `acct:${String(req.body?.email ?? '').trim().toLowerCase()}`,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    message: limitMessage,
-  });
-  const resetLimit = rateLimit({ windowMs: 15 * 60_000, limit: 10, standardHeaders: 'draft-8', legacyHeaders: false, message: limitMessage });
+  const limits = authLimits(ctx.maxFailures);
 
   const login: RequestHandler = (req, res, next) => {
     ctx.passport.authenticate('local', { session: false }, async (err: unknown, user: Express.User | false) => {
@@ -64,6 +97,8 @@ export function authRoutes(ctx: service.AuthContext & { passport: PassportStatic
     {
       method: 'post', path: '/api/auth/register', access: 'public', summary: 'Create a volunteer account and sign in',
       handlers: [
+        limits.registerPerAddress,
+        limits.registerFailuresPerAddress,
         validate({ body: RegisterSchema }),
         async (req, res) => {
           const user = await service.register(ctx, req.body);
@@ -74,7 +109,7 @@ export function authRoutes(ctx: service.AuthContext & { passport: PassportStatic
     },
     {
       method: 'post', path: '/api/auth/login', access: 'public', summary: 'Sign in with e-mail and password',
-      handlers: [perAddress, validate({ body: LoginSchema }), perAccount, login],
+      handlers: [limits.signInPerAddress, validate({ body: LoginSchema }), limits.signInPerAccountAndAddress, login],
     },
     {
       method: 'post', path: '/api/auth/logout', access: 'public', summary: 'Sign out',
@@ -93,18 +128,22 @@ export function authRoutes(ctx: service.AuthContext & { passport: PassportStatic
     {
       method: 'post', path: '/api/auth/password-reset', access: 'public', summary: 'E-mail a single-use reset link',
       handlers: [
-        resetLimit,
+        limits.resetPerAddress,
         validate({ body: PasswordResetRequestSchema }),
-        async (req, res) => {
-          await service.requestPasswordReset(ctx, req.body.email);
+        limits.resetPerAccountAndAddress,
+        (req, res) => {
+          // The answer goes before the account is even looked up, so it takes the same time whether
+          // the address has an account or not (OWASP Authentication Cheat Sheet, "Authentication
+          // and Error Messages"); the lookup, the token and the mail follow on their own.
           res.status(202).json({ message: 'If that address has an account, a reset link is on its way.' });
+          service.requestPasswordReset(ctx, req.body.email).catch((err: unknown) => console.error('password reset:', (err as Error).message));
         },
       ],
     },
     {
       method: 'post', path: '/api/auth/password-reset/confirm', access: 'public', summary: 'Set a new password from a reset link',
       handlers: [
-        resetLimit,
+        limits.confirmPerAddress,
         validate({ body: PasswordResetConfirmSchema }),
         async (req, res) => {
           const user = await service.confirmPasswordReset(ctx, req.body.token, req.body.password);

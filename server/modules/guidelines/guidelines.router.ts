@@ -12,7 +12,7 @@ export function guidelineRoutes(): RouteDef[] {
         validate({ body: GuidelineCheckBodySchema }),
         async (req, res) => {
           // Flat, in the shape of check() itself, with the recipient, its guidelines and the cautions beside it.
-          res.json(await checkAgainst(req.body.recipientId, req.body.blanket));
+          res.json(await checkAgainst(req.body.recipientId, req.body.blanket, undefined, { activeOnly: req.user!.role === 'volunteer' }));
         },
       ],
     },

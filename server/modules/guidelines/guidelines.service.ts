@@ -18,9 +18,15 @@ export interface CheckAnswer extends GuidelineCheckResult {
  * candidate for `alsoFits`. Pass the transaction when called from inside one: the database has a
  * single connection, so a query outside it would wait for it forever.
  */
-export async function checkAgainst(recipientId: number, blanket: BlanketFields, transaction?: Transaction): Promise<CheckAnswer> {
+export async function checkAgainst(
+  recipientId: number,
+  blanket: BlanketFields,
+  transaction?: Transaction,
+  opts: { activeOnly?: boolean } = {},
+): Promise<CheckAnswer> {
   const r = await Recipient.findByPk(recipientId, { transaction });
-  if (!r) throw notFound('That recipient');
+  // Makers see only recipients that are collecting: an inactive one is "not found" to them, like one that never was.
+  if (!r || (opts.activeOnly && !r.active)) throw notFound('That recipient');
   const guidelines = storedGuidelines(r);
   const others = await activeRecipientGuidelines(transaction);
   const result = check(blanket, guidelines, others, { recipientId: r.id });

@@ -11,8 +11,12 @@ export const PHOTO_FOLDER = 'photos';
 export const THUMB_SIZE_PX = 320;
 /** Longest side we keep of the full photo: enough to see stitches, small enough to load on a phone. */
 export const FULL_SIZE_PX = 2560;
-/** Refuse decompression bombs: a small file that claims a huge canvas. */
-export const MAX_INPUT_PIXELS = 60_000_000;
+/**
+ * The largest photo we open: 24 megapixels, twice what a phone's camera saves by default (12 MP, the
+ * larger sensors bin their pixels down to it), so any ordinary phone photo fits and a small file that
+ * claims a huge canvas (a decompression bomb) is refused from its header, before any decoding.
+ */
+export const MAX_INPUT_PIXELS = 24_000_000;
 
 const EXTENSION: Record<PhotoMime, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp' };
 const STORED_NAME = /^[a-f0-9]{32}(-thumb)?\.(jpg|png|webp)$/;
@@ -56,17 +60,37 @@ export async function preparePhoto(file: IncomingFile, index: number): Promise<P
     throw photoError(415, `${which(file, index)} is not a JPEG, PNG or WebP image${type ? ` (its content is ${type.mime})` : ''}`);
   }
   const mime = type.mime as PhotoMime;
+  // The header alone says how big the picture claims to be; a lying file is refused here, unopened.
+  let declared: { width?: number; height?: number };
   try {
-    const source = () => sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' }).rotate();
-    const resized = source().resize({ width: FULL_SIZE_PX, height: FULL_SIZE_PX, fit: 'inside', withoutEnlargement: true });
-    const encoded =
-      mime === 'image/jpeg' ? resized.jpeg({ quality: 86, mozjpeg: true }) : mime === 'image/png' ? resized.png() : resized.webp({ quality: 86 });
-    const { data: full, info } = await encoded.toBuffer({ resolveWithObject: true });
-    const thumb = await source()
-      .resize({ width: THUMB_SIZE_PX, height: THUMB_SIZE_PX, fit: 'inside', withoutEnlargement: true })
-      .webp({ quality: 72 })
-      .toBuffer();
-    return { full, thumb, mime, width: info.width, height: info.height };
+    declared = await sharp(file.buffer).metadata();
+  } catch {
+    throw photoError(400, `${which(file, index)} could not be read as an image; it may be damaged`);
+  }
+  if (!declared.width || !declared.height) throw photoError(400, `${which(file, index)} does not say how big it is; it may be damaged`);
+  if (declared.width * declared.height > MAX_INPUT_PIXELS) {
+    const mp = Math.round((declared.width * declared.height) / 1e6);
+    throw photoError(
+      400,
+      `${which(file, index)} is ${declared.width} × ${declared.height} pixels (${mp} megapixels); photos up to ${MAX_INPUT_PIXELS / 1e6} megapixels are taken, which is more than a phone camera's usual setting`,
+    );
+  }
+  try {
+    // Decoded once: turned upright and brought down to the kept size, then both copies are made
+    // from those pixels, so the original is never decoded a second time for the thumbnail.
+    const { data: pixels, info: px } = await sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' })
+      .rotate()
+      .resize({ width: FULL_SIZE_PX, height: FULL_SIZE_PX, fit: 'inside', withoutEnlargement: true })
+      .raw()
+      .toBuffer({ resolveWithObject: true });
+    const fromPixels = () => sharp(pixels, { raw: { width: px.width, height: px.height, channels: px.channels } });
+    const full = fromPixels();
+    const encoded = mime === 'image/jpeg' ? full.jpeg({ quality: 86, mozjpeg: true }) : mime === 'image/png' ? full.png() : full.webp({ quality: 86 });
+    const [fullData, thumb] = await Promise.all([
+      encoded.toBuffer(),
+      fromPixels().resize({ width: THUMB_SIZE_PX, height: THUMB_SIZE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 72 }).toBuffer(),
+    ]);
+    return { full: fullData, thumb, mime, width: px.width, height: px.height };
   } catch {
     throw photoError(400, `${which(file, index)} could not be read as an image; it may be damaged`);
   }

@@ -1,4 +1,5 @@
 import multer from 'multer';
+import rateLimit from 'express-rate-limit';
 import type { RequestHandler } from 'express';
 import type { Sequelize } from 'sequelize';
 import type { Config } from '../../config/env';
@@ -45,11 +46,25 @@ function receivePhotos(): RequestHandler {
     });
 }
 
+/** Upload requests one person may make in a quarter of an hour: a blanket takes at most four photos. */
+export const UPLOADS_PER_PERSON = 40;
+
 export function photoRoutes(sequelize: Sequelize, config: Config): RouteDef[] {
+  // Every upload costs a decode, so one person (or one stolen session) cannot keep the server busy
+  // with them; counted per account, before the body is read, so a refused request costs nothing.
+  const perPerson = rateLimit({
+    windowMs: 15 * 60_000,
+    limit: UPLOADS_PER_PERSON,
+    keyGenerator: (req) => `photos:${req.user!.id}`,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    message: { error: { message: 'That is a lot of photos in a short time; wait a few minutes and try again', issues: [{ path: 'photos', message: 'Too many uploads' }] } },
+  });
   return [
     {
       method: 'post', path: '/api/blankets/:id/photos', access: 'signed-in', summary: 'Add photos to your blanket (multipart, field photos)',
       handlers: [
+        perPerson,
         validate({ params: IdParamSchema }),
         async (req, res, next) => {
           res.locals.blanket = await blanketForUpload(req.user!, Number(req.params.id));

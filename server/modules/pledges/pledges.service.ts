@@ -149,7 +149,8 @@ async function openNeed(needId: number, sizeCategory: SizeCategory, today: strin
   const need = await Need.findByPk(needId, { include: [{ model: Recipient, as: 'recipient' }], transaction });
   if (!need || !need.recipient) throw fieldError(404, 'needId', 'needId: that need was not found');
   if (!need.recipient.active || need.deadline < today) {
-    throw fieldError(409, 'needId', `needId: ${need.recipient.name} is no longer collecting for this need`);
+    // Says neither who nor why: a recipient that stopped collecting may not be named to makers any more.
+    throw fieldError(409, 'needId', 'needId: this need is no longer collecting blankets; choose another from What is needed');
   }
   if (need.sizeCategory !== sizeCategory) {
     throw fieldError(400, 'sizeCategory', `sizeCategory: ${need.recipient.name} asks for ${need.sizeCategory} blankets here, not ${sizeCategory}`);

@@ -33,7 +33,7 @@ export function siteRoutes(): RouteDef[] {
       handlers: [
         validate({ params: IdParamSchema }),
         async (req, res) => {
-          res.json({ site: await service.getSite(Number(req.params.id)) });
+          res.json({ site: await service.getSite(Number(req.params.id), { activeOnly: req.user!.role === 'volunteer' }) });
         },
       ],
     },

@@ -23,9 +23,10 @@ export async function listSites(active: 'true' | 'false' | 'all'): Promise<SiteV
   return (await Site.findAll({ where, order: [['name', 'ASC']] })).map(siteView);
 }
 
-export async function getSite(id: number): Promise<SiteView> {
+/** With activeOnly (makers), a closed site is "not found": its notes may say where a key is kept. */
+export async function getSite(id: number, opts: { activeOnly?: boolean } = {}): Promise<SiteView> {
   const s = await Site.findByPk(id);
-  if (!s) throw notFound('That drop-off site');
+  if (!s || (opts.activeOnly && !s.active)) throw notFound('That drop-off site');
   return siteView(s);
 }
 

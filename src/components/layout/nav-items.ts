@@ -1,7 +1,7 @@
 import type { LucideIcon } from 'lucide-react';
 import { Home, Ruler, Users, Mail } from 'lucide-react';
 import { HeartHandshake, MapPin, ScanLine } from 'lucide-react';
-import { ClipboardList, HandHeart, Layers } from 'lucide-react';
+import { ClipboardList, HandHeart, Layers, Waypoints } from 'lucide-react';
 import { CalendarClock } from 'lucide-react';
 import type { Role } from '@shared/schemas/user';
 
@@ -21,6 +21,7 @@ export const navItems: NavItem[] = [
   { to: '/blankets', label: 'My blankets', icon: Layers, roles: ['volunteer'] },
   { to: '/drop-off', label: 'Drop-off', icon: CalendarClock, roles: ['volunteer'] },
   { to: '/organiser/intake', label: 'Intake', icon: ScanLine, roles: ['organiser', 'coordinator'] },
+  { to: '/organiser/assign', label: 'Assign', icon: Waypoints, roles: ['organiser', 'coordinator'] },
   { to: '/organiser/drop-offs', label: 'Drop-off day', icon: CalendarClock, roles: ['organiser', 'coordinator'] },
   { to: '/all-blankets', label: 'Blankets', icon: Layers, roles: ['organiser', 'coordinator'] },
   { to: '/recipients', label: 'Recipients', icon: HeartHandshake, roles: ['organiser', 'coordinator'] },

@@ -25,7 +25,7 @@ export default function RegisterPage() {
         <Field label="E-mail" error={formState.errors.email?.message}>
           {({ id, describedBy, invalid }) => <Input id={id} type="email" autoComplete="email" aria-describedby={describedBy} aria-invalid={invalid} {...register('email')} />}
         </Field>
-        <Field label="Password" hint="At least 8 characters. A short sentence is easy to remember and hard to guess." error={formState.errors.password?.message}>
+        <Field label="Password" hint="At least 15 characters. A few words in a row are easy to remember and hard to guess." error={formState.errors.password?.message}>
           {({ id, describedBy, invalid }) => <Input id={id} type="password" autoComplete="new-password" aria-describedby={describedBy} aria-invalid={invalid} {...register('password')} />}
         </Field>
         <Button type="submit" size="lg" className="w-full" busy={reg.isPending}>

@@ -28,7 +28,7 @@ export default function ResetPasswordPage() {
       >
         {!token && <Alert kind="error">This page needs the link from the e-mail we sent.</Alert>}
         {confirm.error && <Alert kind="error">{confirm.error.message}</Alert>}
-        <Field label="New password" hint="At least 8 characters." error={formState.errors.password?.message}>
+        <Field label="New password" hint="At least 15 characters. A few words in a row are easy to remember and hard to guess." error={formState.errors.password?.message}>
           {({ id, describedBy, invalid }) => <Input id={id} type="password" autoComplete="new-password" aria-describedby={describedBy} aria-invalid={invalid} {...register('password')} />}
         </Field>
         <Field label="The same again" error={formState.errors.again?.message}>

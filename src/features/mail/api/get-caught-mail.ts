@@ -1,5 +1,8 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import type { Page } from '@shared/schemas/page';
+import type { OutboxCounts } from '@shared/schemas/mail';
+import { mailKeys } from './keys';
 
 export interface CaughtMail {
   id: number;
@@ -9,13 +12,14 @@ export interface CaughtMail {
   text: string;
   attachments: Array<{ filename: string; contentType: string; content: string }> | null;
   receivedAt: string;
+  /** Single-use links the server took out because the reader is not their addressee. */
+  linksHidden: number;
 }
 
-export const mailKeys = { all: ['mail'] as const, list: () => [...mailKeys.all, 'list'] as const };
-
-export const getCaughtMail = () =>
-  api.get<{ mail: CaughtMail[]; outbox: { pending: number; failed: number; sent: number } }>('/api/mail/caught');
-export const caughtMailQueryOptions = () => queryOptions({ queryKey: mailKeys.list(), queryFn: getCaughtMail, refetchInterval: 5000 });
-export function useCaughtMail() {
-  return useQuery(caughtMailQueryOptions());
+export const getCaughtMail = (page: number) =>
+  api.get<{ mail: Page<CaughtMail>; outbox: OutboxCounts }>(`/api/mail/caught?page=${page}&pageSize=20`);
+export const caughtMailQueryOptions = (page = 1) =>
+  queryOptions({ queryKey: mailKeys.caught(page), queryFn: () => getCaughtMail(page), refetchInterval: 5000, placeholderData: keepPreviousData });
+export function useCaughtMail(page = 1) {
+  return useQuery(caughtMailQueryOptions(page));
 }
