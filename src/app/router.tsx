@@ -51,6 +51,10 @@ export const routes = [
   { path: 'blankets/:id', ...guarded(() => import('./routes/volunteer/blanket-detail')) },
   { path: 'blankets/:id/edit', ...guarded(() => import('./routes/volunteer/edit-blanket')) },
   { path: 'all-blankets', ...guarded(() => import('./routes/organiser/all-blankets'), ['organiser', 'coordinator']) },
+  { path: 'runs', ...guarded(() => import('./routes/delivery/runs'), ['organiser', 'coordinator']) },
+  { path: 'runs/:id', ...guarded(() => import('./routes/delivery/run-detail'), ['organiser', 'coordinator']) },
+  { path: 'runs/:id/packing-sheet', ...guarded(() => import('./routes/delivery/packing-sheet'), ['organiser', 'coordinator']) },
+  { path: 'exports', ...guarded(() => import('./routes/delivery/exports'), ['organiser', 'coordinator']) },
   // Feature pages are added above this line.
   { path: '*', ...page(() => import('./routes/not-found')) },
 ];

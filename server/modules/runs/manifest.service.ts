@@ -54,7 +54,7 @@ async function* runRows(sequelize: Sequelize, runId: number, pageSize: number): 
            JOIN recipients rc ON rc.id = s.recipientId
            JOIN blankets b ON b.id = rb.blanketId
            ${CHECKED_JOIN}
-          WHERE rb.stopId = :stopId AND (rb.box > :box OR (rb.box = :box AND rb.blanketId > :blanketId))
+          WHERE rb.stopId = :stopId AND (rb.box, rb.blanketId) > (:box, :blanketId)
           ORDER BY rb.box ASC, rb.blanketId ASC
           LIMIT :limit`,
         { replacements: { stopId: stop.id, ...after, limit: pageSize }, type: QueryTypes.SELECT },

@@ -2,6 +2,7 @@ import type { LucideIcon } from 'lucide-react';
 import { Home, Ruler, Users, Mail } from 'lucide-react';
 import { HeartHandshake, MapPin, ScanLine } from 'lucide-react';
 import { ClipboardList, HandHeart, Layers, Waypoints } from 'lucide-react';
+import { Truck } from 'lucide-react';
 import type { Role } from '@shared/schemas/user';
 
 export interface NavItem {
@@ -21,6 +22,7 @@ export const navItems: NavItem[] = [
   { to: '/organiser/intake', label: 'Intake', icon: ScanLine, roles: ['organiser', 'coordinator'] },
   { to: '/organiser/assign', label: 'Assign', icon: Waypoints, roles: ['organiser', 'coordinator'] },
   { to: '/all-blankets', label: 'Blankets', icon: Layers, roles: ['organiser', 'coordinator'] },
+  { to: '/runs', label: 'Delivery runs', icon: Truck, roles: ['organiser', 'coordinator'] },
   { to: '/recipients', label: 'Recipients', icon: HeartHandshake, roles: ['organiser', 'coordinator'] },
   { to: '/sites', label: 'Sites', icon: MapPin, roles: ['coordinator'] },
   { to: '/people', label: 'People', icon: Users, roles: ['coordinator'] },
