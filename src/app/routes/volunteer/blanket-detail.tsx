@@ -31,6 +31,14 @@ function outcomeOf(b: BlanketDetail): SelfCheck {
   return { state: 'anywhere', fits: b.fitsRecipients, nearly: [] };
 }
 
+/** What the self-check on this page read, where that differs from what the maker logged or found. */
+function selfCheckNotes(b: BlanketDetail): string[] {
+  const notes: string[] = [];
+  if (b.measured) notes.push(`Checked with the size measured at the drop-off table: ${formatCm(b.measured.widthCm)} × ${formatCm(b.measured.lengthCm)} cm.`);
+  if (b.inspection?.outcome === 'needs_fix') notes.push('The guidelines are only part of it: what the organisers found on the table is under “What to put right”.');
+  return notes;
+}
+
 const yes = (v: boolean) => (v ? 'Yes' : 'No');
 
 function Details({ b, isMaker }: { b: BlanketDetail; isMaker: boolean }) {
@@ -171,7 +179,7 @@ export default function BlanketDetailPage() {
           </Card>
         </div>
         <div className="space-y-6">
-          <SelfCheckPanel outcome={outcomeOf(b)} cautions={b.cautions} />
+          <SelfCheckPanel outcome={outcomeOf(b)} cautions={b.cautions} notes={selfCheckNotes(b)} />
           <Card>
             <CardTitle>History</CardTitle>
             <BlanketHistory events={b.events} />
