@@ -34,3 +34,10 @@ export function normaliseCode(input: string): string | null {
   const code = CODE_PREFIX + body;
   return isBlanketCode(code) ? code : null;
 }
+
+/** Pulls the code out of what a scanner or a paste gives us: the bare code or the tag's link. */
+export function codeFromScan(input: string): string {
+  const s = input.trim();
+  const fromLink = /[?&]code=([A-Za-z0-9-]+)/.exec(s);
+  return fromLink?.[1] ?? s;
+}

@@ -8,6 +8,7 @@ import {
   type BodyStitch,
   type Feature,
   type Fibre,
+  type LabelName,
   type SizeCategory,
 } from './blanket';
 import type { GuidelineCheckResult } from './guidelines';
@@ -218,7 +219,7 @@ export interface BlanketDetail extends BlanketSummary {
   smokeFree: boolean;
   petFree: boolean;
   newYarn: boolean;
-  labelName: 'first-name' | 'anonymous';
+  labelName: LabelName;
   notes: string;
   receivedAt: string | null;
   photos: PhotoView[];

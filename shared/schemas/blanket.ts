@@ -89,6 +89,8 @@ export const BlanketStatusSchema = z.enum(BLANKET_STATUSES);
 export type BlanketStatus = z.infer<typeof BlanketStatusSchema>;
 
 export const LabelNameSchema = z.enum(['first-name', 'anonymous']);
+/** What a blanket's tag says of its maker: their first name, or "Anonymous". */
+export type LabelName = z.infer<typeof LabelNameSchema>;
 
 /** Largest measured side we accept, in cm: past this it is a typing mistake, not a blanket. */
 export const MAX_SIDE_CM = 400;

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { suggestOutcome, CHECKLIST_ITEMS, type Checklist } from '@shared/schemas/intake';
+import type { Checklist } from '@shared/schemas/intake';
+import { suggestOutcome, CHECKLIST_ITEMS } from '@shared/intake/rules';
 import { check } from '@shared/guidelines/check';
 import { defaultGuidelines } from '@shared/guidelines/defaults';
 import { allGoodChecklist as allGood, plainBlanket } from '../fixtures/blankets';

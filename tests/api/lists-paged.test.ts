@@ -7,7 +7,7 @@ import { User } from '../../server/db/models/user';
 import { STATUS_ORDER } from '../../server/modules/blankets/blankets.service';
 import type { BlanketSummary } from '@shared/schemas/blanket-log';
 import type { PledgeView } from '@shared/schemas/pledge';
-import type { IntakeQueue } from '@shared/schemas/intake';
+import type { IntakeQueue } from '@shared/schemas/intake-views';
 import { DEFAULT_PAGE_SIZE, MAX_PAGE_SIZE } from '@shared/schemas/page';
 
 let t: TestApp;

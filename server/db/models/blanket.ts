@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { BlanketStatus, Feature, Fibre } from '@shared/schemas/blanket';
+import type { BlanketStatus, Feature, Fibre, LabelName } from '@shared/schemas/blanket';
 import type { BlanketEvent } from './blanket-event';
 import type { Photo } from './photo';
 
@@ -30,7 +30,7 @@ export class Blanket extends Model<InferAttributes<Blanket>, InferCreationAttrib
   declare smokeFree: boolean;
   declare petFree: boolean;
   declare newYarn: CreationOptional<boolean>;
-  declare labelName: CreationOptional<'first-name' | 'anonymous'>;
+  declare labelName: CreationOptional<LabelName>;
   declare notes: CreationOptional<string>;
   declare receivedAt: CreationOptional<Date | null>;
   declare version: CreationOptional<number>;

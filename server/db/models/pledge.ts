@@ -1,8 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import type { SizeCategory } from '@shared/schemas/blanket';
+import type { PledgeStatus } from '@shared/schemas/pledge';
 import type { Need } from './need';
-
-export type PledgeStatus = 'active' | 'cancelled' | 'fulfilled';
 
 /** "I'll make two crib blankets by February": a promise, against a need or wherever needed most (needId null). */
 export class Pledge extends Model<InferAttributes<Pledge>, InferCreationAttributes<Pledge>> {

@@ -1,9 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import type { Population } from '@shared/schemas/blanket';
+import type { RecipientKind } from '@shared/schemas/recipient';
 import type { Need } from './need';
-
-export const RECIPIENT_KINDS = ['neonatal-unit', 'childrens-ward', 'family-shelter', 'care-home', 'hospice', 'other'] as const;
-export type RecipientKind = (typeof RECIPIENT_KINDS)[number];
 
 /** A place that receives blankets. `guidelines` holds the recipient's guideline set (shared/guidelines). */
 export class Recipient extends Model<InferAttributes<Recipient>, InferCreationAttributes<Recipient>> {

@@ -13,3 +13,5 @@ import './assignments';
 import './delivery';
 // Photos last: they picture the blankets the steps above made.
 import './photos';
+// A message the mail server refused, for the Mail page's list of what is not sent yet.
+import './mail';

@@ -11,7 +11,7 @@ import { User } from '../../db/models/user';
 import { HttpError, fieldError, notFound } from '../../lib/http-error';
 import { maySee, readsAll, type Actor } from '../../auth/actor';
 import { fieldsForCheck, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
-import { findingsOf } from '@shared/intake/findings';
+import { findingsOf } from '@shared/intake/rules';
 import {
   LOG_FIELDS,
   type BlanketCreate,

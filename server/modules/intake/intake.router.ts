@@ -2,13 +2,7 @@ import type { Sequelize } from 'sequelize';
 import type { z } from 'zod';
 import { validate } from '../../middleware/validate';
 import { IdParamSchema } from '@shared/schemas/user';
-import {
-  BlanketCodeParamSchema,
-  InspectionBodySchema,
-  IntakeBodySchema,
-  IntakeQueueQuerySchema,
-  TagsQuerySchema,
-} from '@shared/schemas/intake';
+import { BlanketCodeParamSchema, InspectionBodySchema, IntakeBodySchema, IntakeQueueQuerySchema, TagsQuerySchema } from '@shared/schemas/intake';
 import type { RouteDef } from '../route-table';
 import * as service from './intake.service';
 

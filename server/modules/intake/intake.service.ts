@@ -10,19 +10,9 @@ import { HttpError, notFound } from '../../lib/http-error';
 import { blanketNeedsFixMail } from '../../mail/templates';
 import { sizeCategoryFor } from '@shared/guidelines/size-categories';
 import { fieldsForCheck, sizeOnRecord, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
-import {
-  CHECKLIST_ITEMS,
-  RECEIVABLE_STATUSES,
-  suggestOutcome,
-  type BlanketTag,
-  type IntakeBlanketView,
-  type IntakeBody,
-  type IntakeQueue,
-  type IntakeQueueQuery,
-  type IntakeQueueItem,
-  type InspectionBody,
-  OUTCOME_LABELS,
-} from '@shared/schemas/intake';
+import type { IntakeBody, IntakeQueueQuery, InspectionBody } from '@shared/schemas/intake';
+import { CHECKLIST_ITEMS, RECEIVABLE_STATUSES, suggestOutcome, OUTCOME_LABELS } from '@shared/intake/rules';
+import type { BlanketTag, IntakeBlanketView, IntakeQueue, IntakeQueueItem } from '@shared/schemas/intake-views';
 import { maySee, readsAll, type Actor } from '../../auth/actor';
 import { checkAgainst, type CheckAnswer } from '../guidelines/guidelines.service';
 import { eventView } from '../blankets/blankets.service';

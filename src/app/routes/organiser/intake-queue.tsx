@@ -14,7 +14,7 @@ import { useIntakeQueue } from '@/features/intake/api/get-intake-queue';
 import { rememberedSiteId } from '@/features/intake/components/receive-panel';
 import { StatusBadge, categoryText } from '@/features/intake/components/blanket-summary';
 import { formatCm } from '@shared/guidelines/wording';
-import type { IntakeQueueItem } from '@shared/schemas/intake';
+import type { IntakeQueueItem } from '@shared/schemas/intake-views';
 import { pageCount } from '@shared/schemas/page';
 
 const localDay = (d = new Date()) => `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;

@@ -18,7 +18,9 @@ import { InspectionPanel } from '@/features/intake/components/inspection-panel';
 import { CheckResult } from '@/features/intake/components/check-result';
 import { normaliseCode } from '@shared/blankets/code';
 import { cautionsFor } from '@shared/guidelines/cautions';
-import { codeFromScan, RECEIVABLE_STATUSES, type IntakeBlanketView } from '@shared/schemas/intake';
+import { RECEIVABLE_STATUSES } from '@shared/intake/rules';
+import { codeFromScan } from '@shared/blankets/code';
+import type { IntakeBlanketView } from '@shared/schemas/intake-views';
 import type { Population } from '@shared/schemas/blanket';
 
 const OUTCOME_WORDS: Partial<Record<IntakeBlanketView['status'], string>> = {

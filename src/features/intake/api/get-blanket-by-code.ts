@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { IntakeBlanketView } from '@shared/schemas/intake';
+import type { IntakeBlanketView } from '@shared/schemas/intake-views';
 import type { CheckAnswer } from './check-blanket';
 import { intakeKeys } from './keys';
 

@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api, qs } from '@/lib/api-client';
-import type { IntakeQueue } from '@shared/schemas/intake';
+import type { IntakeQueue } from '@shared/schemas/intake-views';
 import { intakeKeys } from './keys';
 
 /** Which page of the waiting and the expected lists to show; the day's lists come whole. */

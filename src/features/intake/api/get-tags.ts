@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { BlanketTag } from '@shared/schemas/intake';
+import type { BlanketTag } from '@shared/schemas/intake-views';
 import { intakeKeys } from './keys';
 
 export const getTags = (ids: number[]) => api.get<{ tags: BlanketTag[] }>(`/api/blankets/tags?ids=${ids.join(',')}`).then((r) => r.tags);

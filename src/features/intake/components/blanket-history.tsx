@@ -1,6 +1,6 @@
 import { STATUS_LABELS } from '@shared/blankets/status';
 import type { BlanketStatus } from '@shared/schemas/blanket';
-import type { BlanketHistoryEntry } from '@shared/schemas/intake';
+import type { BlanketHistoryEntry } from '@shared/schemas/intake-views';
 
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
 

@@ -3,7 +3,7 @@ import { STATUS_LABELS } from '@shared/blankets/status';
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import { featureLabel, fibreLabel, formatCm, formatIn, yarnWeightName } from '@shared/guidelines/wording';
 import type { BlanketStatus, Feature, Fibre, SizeCategory } from '@shared/schemas/blanket';
-import type { IntakeBlanketView } from '@shared/schemas/intake';
+import type { IntakeBlanketView } from '@shared/schemas/intake-views';
 
 const STATUS_TONES: Record<BlanketStatus, Tone> = {
   in_progress: 'neutral',

@@ -10,15 +10,9 @@ import { ApiError } from '@/lib/api-client';
 import { cautionsFor } from '@shared/guidelines/cautions';
 import { featureLabel, fibreLabel, isInfantPopulation, yarnWeightName } from '@shared/guidelines/wording';
 import { FEATURES, FIBRES, YARN_WEIGHTS, pickBlanketFields, type BlanketFields, type Feature, type Fibre } from '@shared/schemas/blanket';
-import {
-  CHECKLIST_ITEMS,
-  OUTCOME_LABELS,
-  suggestOutcome,
-  type ChecklistKey,
-  type Checklist,
-  type InspectionOutcome,
-  type IntakeBlanketView,
-} from '@shared/schemas/intake';
+import type { Checklist, InspectionOutcome } from '@shared/schemas/intake';
+import { CHECKLIST_ITEMS, OUTCOME_LABELS, suggestOutcome, type ChecklistKey } from '@shared/intake/rules';
+import type { IntakeBlanketView } from '@shared/schemas/intake-views';
 import { useCheckBlanket } from '../api/check-blanket';
 import { useInspectBlanket } from '../api/inspect-blanket';
 import { useIntakeRecipients } from '../api/get-intake-recipients';

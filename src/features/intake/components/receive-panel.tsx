@@ -4,7 +4,8 @@ import { Button } from '@/components/ui/button';
 import { Field, Input, Select } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { ApiError } from '@/lib/api-client';
-import { IntakeBodySchema, type IntakeBlanketView } from '@shared/schemas/intake';
+import { IntakeBodySchema } from '@shared/schemas/intake';
+import type { IntakeBlanketView } from '@shared/schemas/intake-views';
 import { useIntakeSites } from '../api/get-intake-sites';
 import { useReceiveBlanket } from '../api/receive-blanket';
 
