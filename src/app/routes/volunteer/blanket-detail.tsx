@@ -1,6 +1,6 @@
 import { Link, useLocation, useParams } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
-import { Pencil, Printer, Tag } from 'lucide-react';
+import { CalendarClock, Pencil, Printer, Tag } from 'lucide-react';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardTitle } from '@/components/ui/card';
 import { Alert } from '@/components/ui/alert';
@@ -157,6 +157,13 @@ export default function BlanketDetailPage() {
         <StatusActions blanket={b} sites={sites.data ?? []} onChanged={() => void qc.invalidateQueries({ queryKey: pledgeKeys.all })} />
         {b.siteId && b.status === 'booked' && (
           <p className="text-ink-soft">Drop-off: {sites.data?.find((s) => s.id === b.siteId)?.name ?? 'booked'}</p>
+        )}
+        {/* Booking records the site and the time with the move, on its own page. */}
+        {isMaker && (b.status === 'finished' || b.status === 'booked') && (
+          <ButtonLink to={b.status === 'finished' ? `/drop-off?blanket=${b.id}` : '/drop-off'} variant={b.status === 'finished' ? 'primary' : 'secondary'}>
+            <CalendarClock className="size-5" aria-hidden />
+            {b.status === 'finished' ? 'Book a drop-off' : 'Move or cancel the drop-off'}
+          </ButtonLink>
         )}
       </Card>
 
