@@ -46,3 +46,12 @@ test('detail pages (a blanket, a recipient, a blanket at intake) meet WCAG 2.2 A
   await expectAccessible(page, `/recipients/${recipients[0]!.id}`);
   await expectAccessible(page, `/organiser/intake?code=${received.code}`);
 });
+
+test('the assignment board, with a suggestion open, meets WCAG 2.2 AA as axe checks it', async ({ page }) => {
+  await signIn(page, 'organiser');
+  await expectAccessible(page, '/organiser/assign');
+  await page.getByRole('button', { name: 'Suggest assignments' }).click();
+  await page.getByRole('button', { name: /Accept \d+ ticked/ }).waitFor();
+  const { violations } = await new AxeBuilder({ page }).withTags(TAGS).analyze();
+  expect(violations.map((v) => `${v.id}: ${v.help}`)).toEqual([]);
+});

@@ -66,4 +66,8 @@ test('the board works on a phone', async ({ page }) => {
   const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
   expect(overflow).toBeLessThanOrEqual(0);
   await shot(page, 'assign-board-phone');
+  const dir = process.env.SHOTS_DIR ?? 'test-results/shots';
+  await page.screenshot({ path: `${dir}/assign-board-phone-top.png` });
+  await page.locator('[data-testid^="waiting-"]').first().scrollIntoViewIfNeeded();
+  await page.screenshot({ path: `${dir}/assign-board-phone-waiting.png` });
 });

@@ -25,6 +25,8 @@ interface PinMapProps {
   onPick?: (lat: number, lng: number) => void;
   label: string;
   className?: string;
+  /** When given, a click on a pin chooses it (the booking page picks a site this way). */
+  onSelect?: (id: string | number) => void;
 }
 
 function FitToPins({ pins, fallback }: { pins: MapPin[]; fallback: { lat: number; lng: number } }) {
@@ -155,7 +157,7 @@ function Basemap() {
  * attribution are drawn; otherwise the demo town's own basemap (shared/geo), which needs no network.
  * Every pin carries its number, its name on hover or focus, and the list under the map names them all.
  */
-export function PinMap({ pins, fallbackCentre, onPick, label, className }: PinMapProps) {
+export function PinMap({ pins, fallbackCentre, onPick, label, className, onSelect }: PinMapProps) {
   const { data } = useQuery(mapTilesQueryOptions());
   const tiles = data?.tiles ?? null;
   // The demo town is drawn only under pins that are in it: a drive elsewhere with no tile server
@@ -180,13 +182,19 @@ export function PinMap({ pins, fallbackCentre, onPick, label, className }: PinMa
           <FitToPins pins={pins} fallback={fallbackCentre} />
           {onPick && <PickOnClick onPick={onPick} />}
           {numbered.map((p) => (
-            // Pins are labels, not buttons: two places in one building would otherwise be two targets
-            // on top of each other (WCAG 2.5.8). The name shows on hover and in the list below.
+            // Pins are labels, not buttons, unless the map selects by pin: two places in one building
+            // would otherwise be two targets on top of each other (WCAG 2.5.8). The name shows on
+            // hover and in the list below.
             <Marker
-              key={p.id}
+              // A tooltip's permanence is fixed when it mounts, so a newly selected pin mounts anew.
+              key={`${p.id}:${p.selected ? 'on' : 'off'}`}
               position={[p.lat, p.lng]}
-              interactive={false}
-              keyboard={false}
+              // Only a map that selects by pin makes its pins buttons; elsewhere they are labels.
+              interactive={!!onSelect}
+              keyboard={!!onSelect}
+              eventHandlers={onSelect ? { click: () => onSelect(p.id) } : undefined}
+              title={onSelect ? p.label : undefined}
+              alt={`${p.n}: ${p.label}`}
               zIndexOffset={p.selected ? 1000 : 0}
               icon={divIcon({
                 className: cn('kl-pin', `kl-pin-${p.selected ? 'selected' : (p.kind ?? 'recipient')}`),

@@ -125,12 +125,17 @@ export default function AssignBoardPage() {
         </div>
       </Card>
 
+      <nav aria-label="On this page" className="flex flex-wrap gap-4 lg:hidden">
+        <a href="#needs-title">Open needs</a>
+        <a href="#waiting-title">Checked and waiting{waiting.data ? ` (${waiting.data.total})` : ''}</a>
+      </nav>
+
       {suggest.error && <Alert kind="error">{suggest.error.message}</Alert>}
       {suggest.data && <SuggestionReview key={JSON.stringify(suggest.data.pairs.map((p) => p.blanketId))} suggestion={suggest.data} onClose={() => suggest.reset()} />}
 
       <div className="grid items-start gap-6 lg:grid-cols-2">
         <section aria-labelledby="needs-title" className="space-y-4">
-          <h2 id="needs-title" className="text-2xl font-bold">
+          <h2 id="needs-title" className="scroll-mt-4 text-2xl font-bold">
             Open needs <span className="font-normal text-ink-soft">({openNeeds.length} of {allNeeds.length} still open)</span>
           </h2>
           {needs.isPending ? (
@@ -147,7 +152,7 @@ export default function AssignBoardPage() {
         </section>
 
         <section aria-labelledby="waiting-title" className="space-y-4">
-          <h2 id="waiting-title" className="text-2xl font-bold">
+          <h2 id="waiting-title" className="scroll-mt-4 text-2xl font-bold">
             Checked and waiting <span className="font-normal text-ink-soft">({waiting.data?.total ?? 0})</span>
           </h2>
           {waiting.isPending ? (

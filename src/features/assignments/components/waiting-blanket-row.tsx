@@ -21,12 +21,12 @@ export function WaitingBlanketRow({ b, needs, selected, onSelect }: { b: Waiting
   const notFitting = needs.filter((n) => !b.fits.find((f) => f.needId === n.needId)?.ok);
   return (
     <li className="space-y-3 py-4" data-testid={`waiting-${b.code}`}>
-      <div className="flex gap-3">
+      <div className="flex gap-2 sm:gap-3">
         <Checkbox label={<span className="sr-only">Select {b.code}</span>} checked={selected} onChange={(e) => onSelect(e.target.checked)} />
         {b.thumbnailUrl ? (
-          <img src={b.thumbnailUrl} alt={`Blanket ${b.code}`} width={72} height={72} className="size-18 shrink-0 rounded-lg border border-oat-300 object-cover" loading="lazy" />
+          <img src={b.thumbnailUrl} alt={`Blanket ${b.code}`} width={72} height={72} className="size-14 shrink-0 rounded-lg border border-oat-300 object-cover sm:size-18" loading="lazy" />
         ) : (
-          <span className="flex size-18 shrink-0 items-center justify-center rounded-lg border border-dashed border-oat-300 bg-oat-100 text-ink-soft" title="No photo">
+          <span className="flex size-14 shrink-0 items-center justify-center rounded-lg border border-dashed border-oat-300 bg-oat-100 text-ink-soft sm:size-18" title="No photo">
             <ImageOff className="size-6" aria-hidden />
             <span className="sr-only">No photo</span>
           </span>

@@ -23,12 +23,15 @@ export function SelfCheckPanel({
   cautions = [],
   className,
   viewer = 'maker',
+  notes = [],
 }: {
   outcome: SelfCheck;
   cautions?: Caution[];
   className?: string;
   /** The maker checks their own work; organisers see the same check on what the maker logged. */
   viewer?: 'maker' | 'staff';
+  /** What the reader should know about what was checked, e.g. that it used the size measured at intake. */
+  notes?: string[];
 }) {
   return (
     <section aria-labelledby="self-check-title" aria-live="polite" className={cn('space-y-4 rounded-2xl border-2 border-heather-300 bg-white p-5', className)} data-testid="self-check">
@@ -67,6 +70,11 @@ export function SelfCheckPanel({
         </div>
       )}
       {outcome.state === 'checked' && outcome.result.notes.map((n) => <p key={n} className="text-ink-soft">{n}</p>)}
+      {notes.map((n) => (
+        <p key={n} className="text-ink-soft" data-testid="self-check-note">
+          {n}
+        </p>
+      ))}
 
       {outcome.state === 'anywhere' &&
         (outcome.fits.length > 0 ? (
