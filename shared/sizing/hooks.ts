@@ -4,7 +4,7 @@
  */
 
 export const HOOK_CHART_SOURCE =
-  'Crochet hook sizes, mm ↔ US: agreeing across several published charts (not confirmed on the council’s own page)';
+  'Crochet hook sizes, mm ↔ US: from memory (no chart we can name was checked; the pairs match REFERENCES.md)';
 
 export interface HookSize {
   mm: number;

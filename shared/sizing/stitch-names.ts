@@ -4,7 +4,7 @@
  * never feed its output back in.
  */
 
-export const US_UK_SOURCE = 'US ↔ UK stitch names (REFERENCES.md, crochet conventions)';
+export const US_UK_SOURCE = 'US ↔ UK stitch names: from memory (REFERENCES.md, crochet conventions; no handbook checked)';
 
 export type UsStitch = 'sc' | 'hdc' | 'dc' | 'tr' | 'dtr';
 

@@ -9,7 +9,7 @@ import { YARN_WEIGHTS, type YarnWeightCategory } from './yarn-weights';
 /** The one measured value: worsted (#4) in sc/hdc/dc at 5 mm. */
 export const WORSTED_YARDS_PER_SQ_IN = 0.87;
 export const WORSTED_YARDS_PER_SQ_IN_SOURCE =
-  "one maker's measurements, published on a blog: a rule of thumb (REFERENCES.md, crochet conventions)";
+  "from memory: recalled from one maker's published measurements that we cannot name, a rule of thumb (REFERENCES.md, crochet conventions)";
 
 /**
  * Other weights are scaled from the #4 value by the ratio of the CYC crochet gauge midpoints:

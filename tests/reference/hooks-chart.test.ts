@@ -1,9 +1,9 @@
 import { describe, it, expect } from 'vitest';
 import { HOOK_CHART_SOURCE, HOOK_SIZES, mmForUsLabel, usLabelForMm } from '@shared/sizing/hooks';
 
-// Source: Crochet hook sizes, mm ↔ US — agreeing across several published charts (not confirmed on
-// the council's own page). Brands disagree on two: some give B-1 as 2.0 mm and C-2 as 2.5 mm.
-const CHART = 'Crochet hook sizes, mm ↔ US (several published charts)';
+// Source: from memory. REFERENCES.md lists these pairs as agreeing across published charts, but no
+// chart we can name was checked. Brands disagree on two: some give B-1 as 2.0 mm and C-2 as 2.5 mm.
+const CHART = 'Crochet hook sizes, mm ↔ US (from memory)';
 
 const PUBLISHED: [number, string][] = [
   [2.25, 'B-1'],
@@ -26,7 +26,7 @@ const PUBLISHED: [number, string][] = [
 
 describe(CHART, () => {
   it('names its source', () => {
-    expect(HOOK_CHART_SOURCE).toMatch(/^Crochet hook sizes, mm ↔ US/);
+    expect(HOOK_CHART_SOURCE).toMatch(/^Crochet hook sizes, mm ↔ US: from memory/);
   });
 
   it(`${CHART}: exactly the published pairs, stored in mm`, () => {

@@ -1,8 +1,12 @@
 import { describe, it, expect } from 'vitest';
-import { US_TO_UK, US_TO_UK_REFERENCED, US_TO_UK_FROM_MEMORY, usToUkText } from '@shared/sizing/stitch-names';
+import { US_TO_UK, US_TO_UK_REFERENCED, US_TO_UK_FROM_MEMORY, US_UK_SOURCE, usToUkText } from '@shared/sizing/stitch-names';
 
-// Source: US ↔ UK stitch names (REFERENCES.md, crochet conventions): US sc = UK dc, hdc = htr, dc = tr, tr = dtr.
-describe('US ↔ UK stitch names', () => {
+// Source: from memory (REFERENCES.md, crochet conventions; no handbook checked): US sc = UK dc, hdc = htr, dc = tr, tr = dtr.
+describe('US ↔ UK stitch names (from memory)', () => {
+  it('says where the names come from', () => {
+    expect(US_UK_SOURCE).toMatch(/from memory/);
+  });
+
   it.each([
     ['sc', 'dc'],
     ['hdc', 'htr'],

@@ -7,11 +7,11 @@ import {
 } from '@shared/sizing/yarn-estimate';
 
 describe('yarn per area', () => {
-  // Source: one maker's measurements, published on a blog — about 0.87 yd of worsted per square inch
-  // of sc/hdc/dc at 5 mm. A rule of thumb, not a standard.
-  it("about 0.87 yd of worsted per square inch at 5 mm (one maker's measurements, published on a blog: a rule of thumb)", () => {
+  // Source: from memory — about 0.87 yd of worsted per square inch of sc/hdc/dc at 5 mm, recalled
+  // from one maker's published measurements that we cannot name. A rule of thumb, not a standard.
+  it('about 0.87 yd of worsted per square inch at 5 mm (from memory: a rule of thumb)', () => {
     expect(WORSTED_YARDS_PER_SQ_IN).toBe(0.87);
-    expect(WORSTED_YARDS_PER_SQ_IN_SOURCE).toMatch(/one maker's measurements, published on a blog/);
+    expect(WORSTED_YARDS_PER_SQ_IN_SOURCE).toMatch(/^from memory/);
     expect(WORSTED_YARDS_PER_SQ_IN_SOURCE).toMatch(/rule of thumb/);
     expect(YARN_PER_AREA.find((r) => r.category === 4)!.yardsPerSqIn).toBe(0.87);
   });

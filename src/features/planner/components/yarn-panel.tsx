@@ -73,7 +73,7 @@ export function YarnPanel({ state, result, errors, update }: { state: PlannerSta
             {formatLength(sizes.body.width, sizes.body.unit)} × {formatLength(sizes.body.length, sizes.body.unit)} at your swatch.
           </p>
           <Alert kind="info" title="A rule of thumb, not a measurement">
-            Medium (#4) yarn uses about {WORSTED_YARDS_PER_SQ_IN} yd per square inch of sc, hdc or dc fabric, from one maker's published measurements. Other weights
+            Medium (#4) yarn uses about {WORSTED_YARDS_PER_SQ_IN} yd per square inch of sc, hdc or dc fabric: a figure from memory, recalled from one maker's published measurements. Other weights
             are scaled from that by their standard gauges, which is our own estimate. Your yarn, stitch and tension can use noticeably more or less: buy
             enough of one dye lot, or weigh a finished swatch for a closer figure.
           </Alert>
