@@ -12,6 +12,7 @@ import { createApp } from './app';
 import { catcherCredentials, startMailCatcher } from './mail/catcher';
 import { createTransport } from './mail/transport';
 import { startOutboxWorker } from './mail/worker';
+import { startReminderScheduler } from './modules/bookings/reminders';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
@@ -42,6 +43,7 @@ async function main() {
     console.log(`Local mail catcher on 127.0.0.1:${config.mailCatcherPort} (read it on the Mail page as a coordinator)`);
   }
   startOutboxWorker(createTransport(config.smtpUrl, { port: config.mailCatcherPort, credentials }), config.mailFrom);
+  startReminderScheduler({ sequelize, publicUrl: config.publicUrl });
 
   const app = createApp({
     sequelize,

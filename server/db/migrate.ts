@@ -7,6 +7,7 @@ import * as m0010 from './migrations/0010-read-indexes';
 import * as m0020 from './migrations/0020-mail-retry-window';
 import * as m0050 from './migrations/0050-assignments';
 import * as m0060 from './migrations/0060-mail-attachments';
+import * as m0061 from './migrations/0061-drop-off-bookings';
 import * as m0070 from './migrations/0070-delivery-runs';
 
 /**
@@ -21,6 +22,7 @@ const migrations = [
   { name: '0020-mail-retry-window', ...m0020 },
   { name: '0050-assignments', ...m0050 },
   { name: '0060-mail-attachments', ...m0060 },
+  { name: '0061-drop-off-bookings', ...m0061 },
   { name: '0070-delivery-runs', ...m0070 },
 ];
 

@@ -15,6 +15,7 @@ import { guidelineRoutes } from './guidelines/guidelines.router';
 import { pledgeRoutes } from './pledges/pledges.router';
 import { blanketRoutes } from './blankets/blankets.router';
 import { photoRoutes } from './photos/photos.router';
+import { bookingRoutes } from './bookings/bookings.router';
 import { assignmentRoutes } from './assignments/assignments.router';
 import { runRoutes } from './runs/runs.router';
 
@@ -43,6 +44,7 @@ export function allRoutes(ctx: RouteContext): RouteDef[] {
     ...planRoutes(),
     ...recipientRoutes({ sequelize: ctx.sequelize }),
     ...siteRoutes(),
+    ...bookingRoutes({ sequelize: ctx.sequelize, publicUrl: ctx.config.publicUrl, mailFrom: ctx.config.mailFrom }),
     ...guidelineRoutes(),
     ...pledgeRoutes(ctx.sequelize),
     ...blanketRoutes(ctx.sequelize),

@@ -49,7 +49,7 @@ const DELIVERY: readonly Mover[] = ['coordinator'];
 
 export const STATUS_MOVES: readonly StatusMove[] = [
   { from: 'in_progress', to: 'finished', direction: 'forward', by: MAKER, action: 'Mark as finished' },
-  { from: 'finished', to: 'booked', direction: 'forward', by: MAKER, action: 'Book a drop-off' },
+  { from: 'finished', to: 'booked', direction: 'forward', by: MAKER, action: 'Book a drop-off', via: 'booking' },
   { from: 'booked', to: 'received', direction: 'forward', by: STAFF, action: 'Mark as received', via: 'intake' },
   // Booking is a courtesy, not a gate: a maker may walk in with a finished blanket.
   { from: 'finished', to: 'received', direction: 'forward', by: STAFF, action: 'Received without a booking', via: 'intake' },
@@ -64,7 +64,7 @@ export const STATUS_MOVES: readonly StatusMove[] = [
   { from: 'packed', to: 'delivered', direction: 'forward', by: DELIVERY, action: 'Mark as delivered', via: 'delivery' },
 
   { from: 'finished', to: 'in_progress', direction: 'back', by: MAKER, action: 'Back to in progress' },
-  { from: 'booked', to: 'finished', direction: 'back', by: MAKER, action: 'Cancel the drop-off' },
+  { from: 'booked', to: 'finished', direction: 'back', by: MAKER, action: 'Cancel the drop-off', via: 'booking' },
   { from: 'received', to: 'booked', direction: 'back', by: STAFF, action: 'Not received after all' },
   { from: 'checked', to: 'received', direction: 'back', by: STAFF, action: 'Check it again' },
   { from: 'declined', to: 'received', direction: 'back', by: STAFF, action: 'Reconsider' },

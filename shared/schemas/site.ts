@@ -1,5 +1,14 @@
 import { z } from 'zod';
 import { LatSchema, LngSchema } from './recipient';
+import { ClosureSchema, OpeningHoursSchema, SlotCapacitySchema, SlotMinutesSchema, type Closure, type OpeningHours } from './schedule';
+
+/** The schedule a coordinator sets per site; every field optional in a PATCH. */
+const scheduleFields = {
+  openingHours: OpeningHoursSchema.optional(),
+  slotMinutes: SlotMinutesSchema.optional(),
+  slotCapacity: SlotCapacitySchema.optional(),
+  closures: z.array(ClosureSchema).max(100, 'At most 100 closures').optional(),
+};
 
 const text = (label: string, max: number) =>
   z.string({ error: `${label} must be text` }).trim().max(max, `${label}: at most ${max} characters`);
@@ -34,6 +43,7 @@ export const SiteCreateSchema = z
     lat: siteFields.lat.default(null),
     lng: siteFields.lng.default(null),
     active: siteFields.active.default(true),
+    ...scheduleFields,
   })
   .superRefine(pinTogether);
 export type SiteCreate = z.infer<typeof SiteCreateSchema>;
@@ -47,6 +57,7 @@ export const SiteUpdateSchema = z
     lng: siteFields.lng.optional(),
     notes: siteFields.notes,
     active: siteFields.active.optional(),
+    ...scheduleFields,
   })
   .superRefine(pinTogether)
   .refine((v) => Object.values(v).some((x) => x !== undefined), 'Send at least one field to change');
@@ -64,4 +75,8 @@ export interface SiteView {
   lng: number | null;
   notes: string | null;
   active: boolean;
+  openingHours: OpeningHours | null;
+  slotMinutes: number;
+  slotCapacity: number;
+  closures: Closure[];
 }

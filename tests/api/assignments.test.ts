@@ -7,6 +7,7 @@ import { BlanketEvent } from '../../server/db/models/blanket-event';
 import { Need } from '../../server/db/models/need';
 import { Recipient } from '../../server/db/models/recipient';
 import { User } from '../../server/db/models/user';
+import { needCounts } from '../../server/modules/pledges/need-counts';
 import { codeFromBytes } from '@shared/blankets/code';
 import { defaultGuidelines } from '@shared/guidelines/defaults';
 import type { BlanketFields } from '@shared/schemas/blanket';
@@ -87,6 +88,14 @@ describe('POST /api/assignments', () => {
     expect(detail.recipientId ?? detail.recipient?.id).toBe(shelter.id);
     const last = await BlanketEvent.findOne({ where: { blanketId: b.id }, order: [['id', 'DESC']] });
     expect(last).toMatchObject({ kind: 'assignment', fromStatus: 'checked', toStatus: 'assigned' });
+  });
+
+  it('counts a blanket pledged for wherever needed in the need it was assigned to, in the shared need figures', async () => {
+    const need = await needFor(shelter, 4);
+    const b = await checkedBlanket();
+    expect((await needCounts([need.id])).get(need.id)!.assigned).toBe(0);
+    expect((await organiser.post('/api/assignments', { blanketId: b.id, needId: need.id })).status).toBe(201);
+    expect((await needCounts([need.id])).get(need.id)!.assigned).toBe(1);
   });
 
   it('refuses a bare status change to assigned (409) and sends the person to the board', async () => {

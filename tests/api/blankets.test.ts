@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
 import { Blanket } from '../../server/db/models/blanket';
+import { Site } from '../../server/db/models/site';
 import { BlanketEvent } from '../../server/db/models/blanket-event';
 import { Pledge } from '../../server/db/models/pledge';
 import { Need } from '../../server/db/models/need';
@@ -350,7 +351,7 @@ describe('PATCH /api/blankets/:id: the log', () => {
   it('freezes the log once the organisers have the blanket', async () => {
     const p = await preemiePledge(vol, 1);
     const b = await logBlanket(vol, p.id, { status: 'finished' });
-    await vol.patch(`/api/blankets/${b.id}`, { status: 'booked' });
+    expect((await bookDropOff(vol, b.id)).status).toBe(201);
     expect((await moveTo(organiser, b.id, 'received')).status).toBe(200);
     const res = await vol.patch(`/api/blankets/${b.id}`, { widthCm: 44 });
     expect(res.status).toBe(409);
@@ -366,6 +367,7 @@ async function moveTo(who: Client, id: number, status: string) {
     return who.post(`/api/blankets/${id}/intake`, { siteId: site.id, widthCm: b.widthCm, lengthCm: b.lengthCm });
   }
   if (status === 'checked') return who.post(`/api/blankets/${id}/inspection`, { checklist: ALL_GOOD, outcome: 'checked' });
+  if (status === 'booked') return bookDropOff(who, id);
   if (status === 'assigned') {
     const b = (await Blanket.findByPk(id))!;
     const needId = (await Pledge.findByPk(b.pledgeId!))!.needId!;
@@ -374,11 +376,17 @@ async function moveTo(who: Client, id: number, status: string) {
   return who.patch(`/api/blankets/${id}`, { status });
 }
 
+/** Booking goes through a drop-off booking, which records the site and the slot: the soonest one free. */
+async function bookDropOff(who: Client, id: number) {
+  const slot = ((await who.get('/api/slots/soonest?limit=1')).body.soonest as Array<{ siteId: number; start: string }>)[0]!;
+  return who.post('/api/bookings', { siteId: slot.siteId, start: slot.start, blanketIds: [id] });
+}
+
 describe('PATCH /api/blankets/:id: status moves', () => {
   it('refuses receiving or inspecting by a bare status change: those go through intake (409)', async () => {
     const p = await preemiePledge(vol, 1);
     const b = await logBlanket(vol, p.id, { status: 'finished' });
-    await vol.patch(`/api/blankets/${b.id}`, { status: 'booked' });
+    expect((await bookDropOff(vol, b.id)).status).toBe(201);
     const res = await organiser.patch(`/api/blankets/${b.id}`, { status: 'received' });
     expect(res.status).toBe(409);
     expect(res.body.error.issues[0].path).toBe('status');
@@ -400,11 +408,11 @@ describe('PATCH /api/blankets/:id: status moves', () => {
     ];
     for (const [who, status] of steps) {
       const res = await moveTo(who, b.id, status);
-      expect(res.status, `${status}: ${JSON.stringify(res.body)}`).toBe(status === 'assigned' ? 201 : 200);
+      expect(res.status, `${status}: ${JSON.stringify(res.body)}`).toBe(status === 'booked' || status === 'assigned' ? 201 : 200);
       expect((await Blanket.findByPk(b.id))!.status).toBe(status);
     }
     const detail = (await vol.get(`/api/blankets/${b.id}`)).body.blanket as BlanketDetail;
-    const moves = detail.events.filter((e) => ['status', 'intake', 'inspection', 'assignment'].includes(e.kind));
+    const moves = detail.events.filter((e) => ['status', 'booking', 'intake', 'inspection', 'assignment'].includes(e.kind));
     expect(moves.map((e) => [e.fromStatus, e.toStatus, e.actor?.name])).toEqual([
       ['in_progress', 'finished', 'Wren Calloway'],
       ['finished', 'booked', 'Wren Calloway'],
@@ -447,7 +455,7 @@ describe('PATCH /api/blankets/:id: status moves', () => {
     const p = await preemiePledge(vol, 1);
     const b = await logBlanket(vol, p.id, { status: 'finished' });
     expect((await organiser.patch(`/api/blankets/${b.id}`, { status: 'booked' })).status).toBe(403);
-    await vol.patch(`/api/blankets/${b.id}`, { status: 'booked' });
+    expect((await bookDropOff(vol, b.id)).status).toBe(201);
     const own = await vol.patch(`/api/blankets/${b.id}`, { status: 'received' });
     expect(own.status).toBe(403);
     expect(own.body.error.message).toMatch(/organisers/);
@@ -457,23 +465,28 @@ describe('PATCH /api/blankets/:id: status moves', () => {
     expect((await Blanket.findByPk(b.id))!.status).toBe('assigned');
   });
 
-  it('books a drop-off at an open site, and refuses a site that does not exist', async () => {
+  it('sends booking and cancelling a drop-off to the booking, which records the site and slot (409)', async () => {
     const p = await preemiePledge(vol, 1);
     const b = await logBlanket(vol, p.id, { status: 'finished' });
     const nowhere = await vol.patch(`/api/blankets/${b.id}`, { status: 'booked', siteId: 9999 });
     expect(nowhere.status).toBe(400);
     expect(nowhere.body.error.issues[0].path).toBe('siteId');
+    const bare = await vol.patch(`/api/blankets/${b.id}`, { status: 'booked', siteId: (await Site.findOne())!.id });
+    expect(bare.status).toBe(409);
+    expect(bare.body.error.issues[0].path).toBe('status');
+    expect(bare.body.error.message).toMatch(/drop-off booking page/);
     expect((await Blanket.findByPk(b.id))!.status).toBe('finished');
-    const sites = (await vol.get('/api/sites')).body.sites as Array<{ id: number }>;
-    const ok = await vol.patch(`/api/blankets/${b.id}`, { status: 'booked', siteId: sites[0]!.id });
-    expect(ok.status).toBe(200);
-    expect(ok.body.blanket).toMatchObject({ status: 'booked', siteId: sites[0]!.id });
+    expect((await bookDropOff(vol, b.id)).status).toBe(201);
+    const back = await vol.patch(`/api/blankets/${b.id}`, { status: 'finished', reason: 'Plans changed' });
+    expect(back.status).toBe(409);
+    expect((await Blanket.findByPk(b.id))!.status).toBe('booked');
   });
 
   it('offers each person only the moves they can make', async () => {
     const booked = ((await vol.get('/api/blankets')).body.items as BlanketSummary[]).find((b) => b.status === 'booked')!;
     const mine = (await vol.get(`/api/blankets/${booked.id}`)).body.blanket as BlanketDetail;
-    expect(mine.moves).toEqual([{ to: 'finished', direction: 'back', action: expect.any(String) }]);
+    // Cancelling is done on the drop-off booking page, which frees the slot with it.
+    expect(mine.moves).toEqual([]);
     const theirs = (await organiser.get(`/api/blankets/${booked.id}`)).body.blanket as BlanketDetail;
     // Receiving it is the organisers' next step, taken on the intake page rather than by a button here.
     expect(theirs.moves.map((m) => m.to)).toEqual([]);

@@ -3,6 +3,7 @@ import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
 import { Need } from '../../server/db/models/need';
 import { Pledge } from '../../server/db/models/pledge';
 import { Blanket } from '../../server/db/models/blanket';
+import { Assignment } from '../../server/db/models/assignment';
 import { Recipient } from '../../server/db/models/recipient';
 import { needCounts } from '../../server/modules/pledges/need-counts';
 import type { DriveProgress, OpenNeed } from '@shared/schemas/pledge';
@@ -22,7 +23,9 @@ afterAll(async () => t.close());
 /**
  * The counts worked out the long way, row by row, as the rules say them: pledged = quantities of
  * active and fulfilled pledges; finished = their blankets past the hook and not declined; in hand =
- * received, checked or held for a fix; assigned = assigned, packed or delivered.
+ * received, checked or held for a fix; assigned = the need's live assignments (the blanket assigned,
+ * packed or delivered), whatever the blanket was pledged for, plus its pledges' given-out blankets
+ * that have no assignment on record.
  */
 async function countsTheLongWay(needId: number) {
   const need = (await Need.findByPk(needId))!;
@@ -37,7 +40,17 @@ async function countsTheLongWay(needId: number) {
     pledged: promising.reduce((n, p) => n + p.quantity, 0),
     finished: blankets.filter((b) => b.status !== 'in_progress' && b.status !== 'declined').length,
     inHand: has('received', 'checked', 'needs_fix'),
-    assigned: has('assigned', 'packed', 'delivered'),
+    assigned:
+      (await Assignment.findAll({ where: { needId, endedAt: null }, include: [{ model: Blanket, as: 'blanket' }] })).filter((a) =>
+        ['assigned', 'packed', 'delivered'].includes((a as Assignment & { blanket: Blanket }).blanket.status),
+      ).length +
+      (
+        await Promise.all(
+          blankets
+            .filter((b) => ['assigned', 'packed', 'delivered'].includes(b.status))
+            .map(async (b) => (await Assignment.count({ where: { blanketId: b.id, endedAt: null } })) === 0),
+        )
+      ).filter(Boolean).length,
   };
 }
 

@@ -14,6 +14,8 @@ for (const width of [1280, 390]) {
     const findings = page.getByRole('region', { name: 'What to put right' });
     await expect(findings).toBeVisible();
     await expect(findings).toContainText('Fringe on a baby blanket');
+    // The self-check beside it says it is only part of the story, rather than a bare green tick.
+    await expect(page.getByTestId('self-check-note')).toContainText('What to put right');
     await shot(page, `maker-needs-fix-${width}`);
     const pageWidth = await page.evaluate(() => document.documentElement.scrollWidth);
     expect(pageWidth).toBeLessThanOrEqual(width);
@@ -29,7 +31,11 @@ test('a maker prints several tags at once from My blankets, and a tag that is no
   await signIn(page, 'tobias@example.org');
   await page.goto('/blankets');
   const boxes = page.getByRole('checkbox', { name: /^Choose KL-.* to print its tag$/ });
-  await expect(boxes).toHaveCount(2);
+  await expect(page.getByTestId('blanket-row').first()).toBeVisible();
+  // One box per blanket on the page, each named after its blanket.
+  const rows = await page.getByTestId('blanket-row').count();
+  expect(rows).toBeGreaterThan(1);
+  await expect(boxes).toHaveCount(rows);
   await boxes.nth(0).check();
   await boxes.nth(1).check();
   await expect(page.getByText('2 blankets chosen.')).toBeVisible();
@@ -48,4 +54,13 @@ test('a maker prints several tags at once from My blankets, and a tag that is no
   await shot(page, 'maker-tag-refused');
   await page.goto('/tags?ids=1;2');
   await expect(page.getByText('No blankets chosen')).toBeVisible();
+});
+
+test('a pledge whose blanket was declined says so and still offers to log another', async ({ page }) => {
+  await signIn(page, 'dev@example.org');
+  await page.goto('/pledges');
+  const pledge = page.getByRole('region', { name: /Kestrel Rise Hospice/ }).first();
+  await expect(pledge).toContainText('1 declined at intake (not counted)');
+  await expect(pledge.getByRole('link', { name: 'Log a blanket' })).toBeVisible();
+  await shot(page, 'maker-declined-pledge');
 });

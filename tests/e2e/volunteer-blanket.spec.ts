@@ -110,14 +110,13 @@ test('a volunteer pledges, logs a blanket with a photo, fixes what the self-chec
   await expect(page.getByTestId('blanket-history')).toContainText('1 photo added');
   await shot(page, 'volunteer-blanket-detail');
 
-  // Book the drop-off: the maker says where, and the timeline moves on.
-  await page.getByRole('button', { name: 'Book a drop-off' }).click();
-  const booking = page.getByRole('form', { name: 'Book a drop-off' });
-  const where = booking.getByLabel('Where will you bring it?');
-  await where.selectOption((await where.locator('option', { hasText: 'Thimbleford Library' }).getAttribute('value'))!);
-  await booking.getByRole('button', { name: 'Book it' }).click();
-  await expect(page.getByText('Drop-off: Thimbleford Library')).toBeVisible();
-  await expect(page.getByTestId('blanket-history')).toContainText('Finished → Drop-off booked');
+  // Book the drop-off: the blanket page sends the maker to the booking page with this blanket chosen.
+  await page.getByRole('link', { name: 'Book a drop-off' }).click();
+  await expect(page.getByRole('checkbox', { name: new RegExp(code) })).toBeChecked();
+  await page.getByRole('list', { name: 'Soonest free times' }).getByRole('button').first().click();
+  await page.getByRole('button', { name: /^Book / }).click();
+  await expect(page.getByText(/^Booked: /)).toBeVisible();
+  await expect(page.getByTestId('my-booking').filter({ hasText: code })).toBeVisible();
 
   // "My blankets" lists it with its code, in the table on a wide screen...
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My blankets' }).click();

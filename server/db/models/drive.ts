@@ -8,6 +8,8 @@ export class Drive extends Model<InferAttributes<Drive>, InferCreationAttributes
   declare summary: string;
   declare startsOn: string;
   declare endsOn: string;
+  /** IANA name; every time and every "today" in the drive is read in this zone. */
+  declare timeZone: CreationOptional<string>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -21,6 +23,7 @@ export function initDrive(sequelize: Sequelize) {
       summary: { type: DataTypes.TEXT, allowNull: false },
       startsOn: { type: DataTypes.DATEONLY, allowNull: false },
       endsOn: { type: DataTypes.DATEONLY, allowNull: false },
+      timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: 'Europe/London' },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

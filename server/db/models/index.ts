@@ -14,6 +14,7 @@ import { initBlanket, Blanket } from './blanket';
 import { initBlanketEvent, BlanketEvent } from './blanket-event';
 import { initPhoto, Photo } from './photo';
 import { initPlan, Plan } from './plan';
+import { Booking, BookingBlanket, initBooking } from './booking';
 import { initAssignment, Assignment } from './assignment';
 import { initRuns, Run, RunStop, RunBlanket, Export } from './run';
 
@@ -36,6 +37,7 @@ export function initModels(sequelize: Sequelize) {
   initBlanketEvent(sequelize);
   initPhoto(sequelize);
   initPlan(sequelize);
+  initBooking(sequelize);
   initAssignment(sequelize);
   initRuns(sequelize);
 
@@ -69,6 +71,12 @@ export function initModels(sequelize: Sequelize) {
   Blanket.hasMany(Photo, { foreignKey: 'blanketId', as: 'photos' });
   Photo.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
 
+  User.hasMany(Booking, { foreignKey: 'userId', as: 'bookings' });
+  Booking.belongsTo(User, { foreignKey: 'userId', as: 'maker' });
+  Site.hasMany(Booking, { foreignKey: 'siteId', as: 'bookings' });
+  Booking.belongsTo(Site, { foreignKey: 'siteId', as: 'site' });
+  Booking.belongsToMany(Blanket, { through: BookingBlanket, foreignKey: 'bookingId', otherKey: 'blanketId', as: 'blankets' });
+  Blanket.belongsToMany(Booking, { through: BookingBlanket, foreignKey: 'blanketId', otherKey: 'bookingId', as: 'bookings' });
   Blanket.hasMany(Assignment, { foreignKey: 'blanketId', as: 'assignments' });
   Assignment.belongsTo(Blanket, { foreignKey: 'blanketId', as: 'blanket' });
   Need.hasMany(Assignment, { foreignKey: 'needId', as: 'assignments' });

@@ -9,6 +9,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare role: CreationOptional<Role>;
   declare active: CreationOptional<boolean>;
   declare town: CreationOptional<string | null>;
+  /** Whether a reminder goes out the day before each drop-off this person books. */
+  declare bookingReminders: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare version: CreationOptional<number>;
@@ -28,6 +30,7 @@ export function initUser(sequelize: Sequelize) {
       role: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'volunteer' },
       active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
       town: { type: DataTypes.STRING(120), allowNull: true },
+      bookingReminders: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },

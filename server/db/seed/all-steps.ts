@@ -7,6 +7,8 @@ import './recipients';
 
 export {};
 import './volunteering';
+// Opening hours and the demo's bookings: after the blankets they book.
+import './drop-offs';
 // Assignments after the blankets they place.
 import './assignments';
 // Delivery runs take the assigned, packed and delivered blankets the steps above made.

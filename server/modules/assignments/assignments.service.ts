@@ -1,4 +1,4 @@
-import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { Assignment } from '../../db/models/assignment';
 import { Blanket } from '../../db/models/blanket';
 import { BlanketEvent } from '../../db/models/blanket-event';
@@ -11,6 +11,7 @@ import { User } from '../../db/models/user';
 import { HttpError, fieldError, notFound } from '../../lib/http-error';
 import { moveBlanket } from '../blankets/move-blanket';
 import { storedGuidelines } from '../recipients/recipients.service';
+import { needCounts } from '../pledges/need-counts';
 import type { Actor } from '../../auth/actor';
 import { STATUS_LABELS } from '@shared/blankets/status';
 import { cautionsFor } from '@shared/guidelines/cautions';
@@ -301,14 +302,10 @@ function urgencyOf(daysLeft: number): Urgency {
   return daysLeft < 0 ? 'overdue' : daysLeft <= SOON_DAYS ? 'soon' : 'later';
 }
 
-/** Live assignments per need, in one grouped query. */
+/** Assigned per need, from the one aggregate every page that shows need figures reads. */
 async function assignedPerNeed(needIds: number[]): Promise<Map<number, number>> {
-  if (needIds.length === 0) return new Map();
-  const rows = await Assignment.sequelize!.query<{ needId: number; n: number }>(
-    'SELECT needId, COUNT(*) AS n FROM assignments WHERE endedAt IS NULL AND needId IN (:needIds) GROUP BY needId',
-    { replacements: { needIds }, type: QueryTypes.SELECT },
-  );
-  return new Map(rows.map((r) => [Number(r.needId), Number(r.n)]));
+  const counts = await needCounts(needIds);
+  return new Map([...counts].map(([id, c]) => [id, c.assigned]));
 }
 
 async function openNeeds(filter: { recipientId?: number; sizeCategory?: SizeCategory }, today: Date): Promise<Array<BoardNeed & { guidelines: MatchNeed['guidelines'] }>> {

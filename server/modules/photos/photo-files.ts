@@ -76,21 +76,15 @@ export async function preparePhoto(file: IncomingFile, index: number): Promise<P
     );
   }
   try {
-    // Decoded once: turned upright and brought down to the kept size, then both copies are made
-    // from those pixels, so the original is never decoded a second time for the thumbnail.
-    const { data: pixels, info: px } = await sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' })
+    // The original is decoded and resized once, to the copy we keep; the thumbnail is made from that
+    // copy, which is a fraction of the original's size, rather than from the original again.
+    const resized = sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' })
       .rotate()
-      .resize({ width: FULL_SIZE_PX, height: FULL_SIZE_PX, fit: 'inside', withoutEnlargement: true })
-      .raw()
-      .toBuffer({ resolveWithObject: true });
-    const fromPixels = () => sharp(pixels, { raw: { width: px.width, height: px.height, channels: px.channels } });
-    const full = fromPixels();
-    const encoded = mime === 'image/jpeg' ? full.jpeg({ quality: 86, mozjpeg: true }) : mime === 'image/png' ? full.png() : full.webp({ quality: 86 });
-    const [fullData, thumb] = await Promise.all([
-      encoded.toBuffer(),
-      fromPixels().resize({ width: THUMB_SIZE_PX, height: THUMB_SIZE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 72 }).toBuffer(),
-    ]);
-    return { full: fullData, thumb, mime, width: px.width, height: px.height };
+      .resize({ width: FULL_SIZE_PX, height: FULL_SIZE_PX, fit: 'inside', withoutEnlargement: true });
+    const encoded = mime === 'image/jpeg' ? resized.jpeg({ quality: 86, mozjpeg: true }) : mime === 'image/png' ? resized.png() : resized.webp({ quality: 86 });
+    const { data: full, info } = await encoded.toBuffer({ resolveWithObject: true });
+    const thumb = await sharp(full).resize({ width: THUMB_SIZE_PX, height: THUMB_SIZE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 72 }).toBuffer();
+    return { full, thumb, mime, width: info.width, height: info.height };
   } catch {
     throw photoError(400, `${which(file, index)} could not be read as an image; it may be damaged`);
   }

@@ -2,6 +2,7 @@ import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { Need } from '../../db/models/need';
 import { Pledge } from '../../db/models/pledge';
 import { Blanket } from '../../db/models/blanket';
+import { Assignment } from '../../db/models/assignment';
 import { ASSIGNED_STATUSES, FINISHED_STATUSES, WITH_ORGANISERS } from '@shared/blankets/status';
 import type { NeedCounts } from '@shared/schemas/pledge';
 
@@ -65,7 +66,7 @@ const WRITE_HOOKS = ['afterCreate', 'afterUpdate', 'afterDestroy', 'afterSave', 
 function watchWrites(sequelize: Sequelize) {
   const seen = watched.get(sequelize) ?? new Set<unknown>();
   watched.set(sequelize, seen);
-  for (const model of [Need, Pledge, Blanket]) {
+  for (const model of [Need, Pledge, Blanket, Assignment]) {
     // Models are initialised again for each database a test opens; watch each initialisation once.
     const id = model.options;
     if (seen.has(id)) continue;
@@ -88,18 +89,32 @@ async function countNeeds(needIds: readonly number[], withBlankets: boolean, tra
   const out = new Map<number, NeedCounts>();
   // The status lists are constants of the code, never input, so they are written into the SQL.
   const blanketColumns = withBlankets
-    ? `, COALESCE(b.finished, 0) AS finished, COALESCE(b.inHand, 0) AS inHand, COALESCE(b.assigned, 0) AS assigned`
+    ? `, COALESCE(b.finished, 0) AS finished, COALESCE(b.inHand, 0) AS inHand, COALESCE(a.assigned, 0) AS assigned`
     : `, 0 AS finished, 0 AS inHand, 0 AS assigned`;
+  // Assigned counts the need's live assignments, whoever pledged the blanket: a blanket pledged for
+  // "wherever needed most" or redirected at intake fills the need it was assigned to. A blanket given
+  // out with no assignment on record (moved by a script, say) still counts for its pledge's need.
   const blanketJoin = withBlankets
     ? `LEFT JOIN (
          SELECT p.needId AS needId,
            SUM(CASE WHEN bl.status IN (${list(FINISHED_STATUSES)}) THEN 1 ELSE 0 END) AS finished,
-           SUM(CASE WHEN bl.status IN (${list(WITH_ORGANISERS)}) THEN 1 ELSE 0 END) AS inHand,
-           SUM(CASE WHEN bl.status IN (${list(ASSIGNED_STATUSES)}) THEN 1 ELSE 0 END) AS assigned
+           SUM(CASE WHEN bl.status IN (${list(WITH_ORGANISERS)}) THEN 1 ELSE 0 END) AS inHand
          FROM pledges p JOIN blankets bl ON bl.pledgeId = p.id
          WHERE p.needId IN (:needIds) AND p.status IN (${list(PROMISING_PLEDGE_STATUSES)})
          GROUP BY p.needId
-       ) b ON b.needId = n.id`
+       ) b ON b.needId = n.id
+       LEFT JOIN (
+         SELECT needId, COUNT(*) AS assigned FROM (
+           SELECT ag.needId AS needId
+           FROM assignments ag JOIN blankets ab ON ab.id = ag.blanketId
+           WHERE ag.needId IN (:needIds) AND ag.endedAt IS NULL AND ab.status IN (${list(ASSIGNED_STATUSES)})
+           UNION ALL
+           SELECT p.needId AS needId
+           FROM pledges p JOIN blankets bl ON bl.pledgeId = p.id
+           WHERE p.needId IN (:needIds) AND p.status IN (${list(PROMISING_PLEDGE_STATUSES)}) AND bl.status IN (${list(ASSIGNED_STATUSES)})
+             AND NOT EXISTS (SELECT 1 FROM assignments x WHERE x.blanketId = bl.id AND x.endedAt IS NULL)
+         ) GROUP BY needId
+       ) a ON a.needId = n.id`
     : '';
   const rows = await Need.sequelize!.query<{
     needId: number;

@@ -11,6 +11,10 @@ export function siteView(s: Site): SiteView {
     lng: s.lng,
     notes: s.notes ?? null,
     active: s.active,
+    openingHours: s.openingHours ?? null,
+    slotMinutes: s.slotMinutes,
+    slotCapacity: s.slotCapacity,
+    closures: [...(s.closures ?? [])].sort((a, b) => a.from.localeCompare(b.from)),
   };
 }
 
@@ -34,6 +38,10 @@ export async function createSite(input: SiteCreate): Promise<SiteView> {
     lng: input.lng,
     notes: input.notes ?? null,
     active: input.active,
+    openingHours: input.openingHours ?? null,
+    slotMinutes: input.slotMinutes,
+    slotCapacity: input.slotCapacity,
+    closures: input.closures ?? null,
   });
   return siteView(s);
 }
@@ -54,6 +62,11 @@ export async function updateSite(id: number, input: SiteUpdate): Promise<SiteVie
   s.lng = lng;
   if (input.notes !== undefined) s.notes = input.notes;
   if (input.active !== undefined) s.active = input.active;
+  // Existing bookings keep their times when hours change; the organisers see them in the site's day.
+  if (input.openingHours !== undefined) s.openingHours = input.openingHours;
+  if (input.slotMinutes !== undefined) s.slotMinutes = input.slotMinutes;
+  if (input.slotCapacity !== undefined) s.slotCapacity = input.slotCapacity;
+  if (input.closures !== undefined) s.closures = input.closures;
   await s.save();
   return siteView(s);
 }

@@ -2,6 +2,7 @@ import type { LucideIcon } from 'lucide-react';
 import { Home, Ruler, Users, Mail } from 'lucide-react';
 import { HeartHandshake, MapPin, ScanLine } from 'lucide-react';
 import { ClipboardList, HandHeart, Layers, Waypoints } from 'lucide-react';
+import { CalendarClock } from 'lucide-react';
 import { Truck } from 'lucide-react';
 import type { Role } from '@shared/schemas/user';
 
@@ -19,8 +20,10 @@ export const navItems: NavItem[] = [
   { to: '/needs', label: 'What’s needed', icon: HandHeart, roles: ['volunteer', 'organiser', 'coordinator'] },
   { to: '/pledges', label: 'My pledges', icon: ClipboardList, roles: ['volunteer'] },
   { to: '/blankets', label: 'My blankets', icon: Layers, roles: ['volunteer'] },
+  { to: '/drop-off', label: 'Drop-off', icon: CalendarClock, roles: ['volunteer'] },
   { to: '/organiser/intake', label: 'Intake', icon: ScanLine, roles: ['organiser', 'coordinator'] },
   { to: '/organiser/assign', label: 'Assign', icon: Waypoints, roles: ['organiser', 'coordinator'] },
+  { to: '/organiser/drop-offs', label: 'Drop-off day', icon: CalendarClock, roles: ['organiser', 'coordinator'] },
   { to: '/all-blankets', label: 'Blankets', icon: Layers, roles: ['organiser', 'coordinator'] },
   { to: '/runs', label: 'Delivery runs', icon: Truck, roles: ['organiser', 'coordinator'] },
   { to: '/recipients', label: 'Recipients', icon: HeartHandshake, roles: ['organiser', 'coordinator'] },

@@ -25,6 +25,8 @@ interface PinMapProps {
   onPick?: (lat: number, lng: number) => void;
   label: string;
   className?: string;
+  /** When given, a click on a pin chooses it (the booking page picks a site this way). */
+  onSelect?: (id: string | number) => void;
 }
 
 function FitToPins({ pins, fallback }: { pins: MapPin[]; fallback: { lat: number; lng: number } }) {
@@ -155,7 +157,7 @@ function Basemap() {
  * attribution are drawn; otherwise the demo town's own basemap (shared/geo), which needs no network.
  * Every pin carries its number, its name on hover or focus, and the list under the map names them all.
  */
-export function PinMap({ pins, fallbackCentre, onPick, label, className }: PinMapProps) {
+export function PinMap({ pins, fallbackCentre, onPick, label, className, onSelect }: PinMapProps) {
   const { data } = useQuery(mapTilesQueryOptions());
   const tiles = data?.tiles ?? null;
   // The demo town is drawn only under pins that are in it: a drive elsewhere with no tile server
@@ -181,8 +183,10 @@ export function PinMap({ pins, fallbackCentre, onPick, label, className }: PinMa
           {onPick && <PickOnClick onPick={onPick} />}
           {numbered.map((p) => (
             <Marker
-              key={p.id}
+              // A tooltip's permanence is fixed when it mounts, so a newly selected pin mounts anew.
+              key={`${p.id}:${p.selected ? 'on' : 'off'}`}
               position={[p.lat, p.lng]}
+              eventHandlers={onSelect ? { click: () => onSelect(p.id) } : undefined}
               title={p.label}
               alt={`${p.n}: ${p.label}`}
               zIndexOffset={p.selected ? 1000 : 0}

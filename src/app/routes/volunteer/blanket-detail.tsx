@@ -1,6 +1,6 @@
 import { Link, useLocation, useParams } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
-import { Pencil, Printer, Tag } from 'lucide-react';
+import { CalendarClock, Pencil, Printer, Tag } from 'lucide-react';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardTitle } from '@/components/ui/card';
 import { Alert } from '@/components/ui/alert';
@@ -29,6 +29,14 @@ import type { LoggedState } from './log-blanket';
 function outcomeOf(b: BlanketDetail): SelfCheck {
   if (b.recipient && b.selfCheck) return { state: 'checked', recipient: b.recipient, result: b.selfCheck };
   return { state: 'anywhere', fits: b.fitsRecipients, nearly: [] };
+}
+
+/** What the self-check on this page read, where that differs from what the maker logged or found. */
+function selfCheckNotes(b: BlanketDetail): string[] {
+  const notes: string[] = [];
+  if (b.measured) notes.push(`Checked with the size measured at the drop-off table: ${formatCm(b.measured.widthCm)} × ${formatCm(b.measured.lengthCm)} cm.`);
+  if (b.inspection?.outcome === 'needs_fix') notes.push('The guidelines are only part of it: what the organisers found on the table is under “What to put right”.');
+  return notes;
 }
 
 const yes = (v: boolean) => (v ? 'Yes' : 'No');
@@ -150,6 +158,13 @@ export default function BlanketDetailPage() {
         {b.siteId && b.status === 'booked' && (
           <p className="text-ink-soft">Drop-off: {sites.data?.find((s) => s.id === b.siteId)?.name ?? 'booked'}</p>
         )}
+        {/* Booking records the site and the time with the move, on its own page. */}
+        {isMaker && (b.status === 'finished' || b.status === 'booked') && (
+          <ButtonLink to={b.status === 'finished' ? `/drop-off?blanket=${b.id}` : '/drop-off'} variant={b.status === 'finished' ? 'primary' : 'secondary'}>
+            <CalendarClock className="size-5" aria-hidden />
+            {b.status === 'finished' ? 'Book a drop-off' : 'Move or cancel the drop-off'}
+          </ButtonLink>
+        )}
       </Card>
 
       <div className="grid gap-6 lg:grid-cols-3">
@@ -164,7 +179,7 @@ export default function BlanketDetailPage() {
           </Card>
         </div>
         <div className="space-y-6">
-          <SelfCheckPanel outcome={outcomeOf(b)} cautions={b.cautions} />
+          <SelfCheckPanel outcome={outcomeOf(b)} cautions={b.cautions} notes={selfCheckNotes(b)} />
           <Card>
             <CardTitle>History</CardTitle>
             <BlanketHistory events={b.events} />

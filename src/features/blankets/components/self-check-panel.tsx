@@ -18,7 +18,18 @@ const VERDICT_FOR_MAKER: Record<Verdict, string> = {
  * What the guideline check says about the blanket, in the maker's words: each problem, and how to
  * put it right at home where that can be done. Never blocks saving: the maker decides.
  */
-export function SelfCheckPanel({ outcome, cautions = [], className }: { outcome: SelfCheck; cautions?: Caution[]; className?: string }) {
+export function SelfCheckPanel({
+  outcome,
+  cautions = [],
+  className,
+  notes = [],
+}: {
+  outcome: SelfCheck;
+  cautions?: Caution[];
+  className?: string;
+  /** What the reader should know about what was checked, e.g. that it used the size measured at intake. */
+  notes?: string[];
+}) {
   return (
     <section aria-labelledby="self-check-title" aria-live="polite" className={cn('space-y-4 rounded-2xl border-2 border-heather-300 bg-white p-5', className)} data-testid="self-check">
       <h2 id="self-check-title" className="flex items-center gap-2 text-xl font-bold">
@@ -56,6 +67,11 @@ export function SelfCheckPanel({ outcome, cautions = [], className }: { outcome:
         </div>
       )}
       {outcome.state === 'checked' && outcome.result.notes.map((n) => <p key={n} className="text-ink-soft">{n}</p>)}
+      {notes.map((n) => (
+        <p key={n} className="text-ink-soft" data-testid="self-check-note">
+          {n}
+        </p>
+      ))}
 
       {outcome.state === 'anywhere' &&
         (outcome.fits.length > 0 ? (

@@ -3,7 +3,8 @@ import { api } from '@/lib/api-client';
 import type { SiteView } from '@shared/schemas/site';
 import { siteKeys } from './keys';
 
-export type SiteInput = Omit<SiteView, 'id'>;
+/** The site's own fields; its schedule is saved on its own (save-site-schedule.ts). */
+export type SiteInput = Omit<SiteView, 'id' | 'openingHours' | 'slotMinutes' | 'slotCapacity' | 'closures'>;
 
 /** Adds a site, or changes one when `id` is given. */
 export const saveSite = ({ id, ...input }: SiteInput & { id?: number }) =>

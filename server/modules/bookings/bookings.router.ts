@@ -1,0 +1,135 @@
+import type { Sequelize } from 'sequelize';
+import type { z } from 'zod';
+import { validate } from '../../middleware/validate';
+import { IdParamSchema } from '@shared/schemas/user';
+import { DriveClockUpdateSchema } from '@shared/schemas/schedule';
+import {
+  BookingCreateSchema,
+  BookingListQuerySchema,
+  BookingUpdateSchema,
+  ReminderPreferenceSchema,
+  SlotQuerySchema,
+  SoonestQuerySchema,
+} from '@shared/schemas/booking';
+import { User } from '../../db/models/user';
+import type { RouteDef } from '../route-table';
+import * as service from './bookings.service';
+import { siteSlots, soonestSlots } from './slots.service';
+import { driveZone, setDriveZone } from './drive-clock';
+
+export interface BookingRouteContext {
+  sequelize: Sequelize;
+  publicUrl: string;
+  mailFrom: string;
+}
+
+export function bookingRoutes(ctx: BookingRouteContext): RouteDef[] {
+  const bctx: service.BookingContext = { sequelize: ctx.sequelize, publicUrl: ctx.publicUrl, mailFrom: ctx.mailFrom };
+  return [
+    {
+      method: 'get', path: '/api/drive/clock', access: 'public', summary: "The drive's time zone and today's date in it",
+      handlers: [
+        async (_req, res) => {
+          const timeZone = await driveZone();
+          res.json({ timeZone, today: new Intl.DateTimeFormat('en-CA', { timeZone }).format(new Date()) });
+        },
+      ],
+    },
+    {
+      method: 'put', path: '/api/drive/clock', access: ['coordinator'], summary: "Set the drive's time zone (an IANA name)",
+      handlers: [
+        validate({ body: DriveClockUpdateSchema }),
+        async (req, res) => {
+          const { timeZone } = req.body as z.infer<typeof DriveClockUpdateSchema>;
+          res.json({ timeZone: await ctx.sequelize.transaction((t) => setDriveZone(timeZone, t)) });
+        },
+      ],
+    },
+    {
+      method: 'get', path: '/api/sites/:id/slots', access: 'signed-in', summary: "A site's drop-off slots between two days, with the room left in each",
+      handlers: [
+        validate({ params: IdParamSchema, query: SlotQuerySchema }),
+        async (req, res) => {
+          const q = req.query as unknown as z.infer<typeof SlotQuerySchema>;
+          res.json(await siteSlots(Number(req.params.id), q.from, q.to));
+        },
+      ],
+    },
+    {
+      method: 'get', path: '/api/slots/soonest', access: 'signed-in', summary: 'The soonest drop-off slots with room across sites, and each site\'s next one',
+      handlers: [
+        validate({ query: SoonestQuerySchema }),
+        async (req, res) => {
+          const q = req.query as unknown as z.infer<typeof SoonestQuerySchema>;
+          res.json(await soonestSlots(q.limit));
+        },
+      ],
+    },
+    {
+      method: 'get', path: '/api/bookings', access: 'signed-in', summary: "Your drop-off bookings, or a site's day (?siteId=&day=, organisers)",
+      handlers: [
+        validate({ query: BookingListQuerySchema }),
+        async (req, res) => {
+          const q = req.query as unknown as z.infer<typeof BookingListQuerySchema>;
+          res.json({ bookings: await service.listBookings(req.user!, q), timeZone: await driveZone() });
+        },
+      ],
+    },
+    {
+      method: 'post', path: '/api/bookings', access: 'signed-in', summary: 'Book a drop-off slot for finished blankets (409 when full)',
+      handlers: [
+        validate({ body: BookingCreateSchema }),
+        async (req, res) => {
+          res.status(201).json({ booking: await service.createBooking(bctx, req.user!, req.body) });
+        },
+      ],
+    },
+    {
+      method: 'get', path: '/api/bookings/reminders', access: 'signed-in', summary: 'Whether you get a reminder the day before a drop-off',
+      handlers: [
+        async (req, res) => {
+          const me = await User.findByPk(req.user!.id, { attributes: ['id', 'bookingReminders'] });
+          res.json({ bookingReminders: me?.bookingReminders ?? true });
+        },
+      ],
+    },
+    {
+      method: 'put', path: '/api/bookings/reminders', access: 'signed-in', summary: 'Turn drop-off reminders on or off',
+      handlers: [
+        validate({ body: ReminderPreferenceSchema }),
+        async (req, res) => {
+          const { bookingReminders } = req.body as z.infer<typeof ReminderPreferenceSchema>;
+          await ctx.sequelize.transaction((transaction) => User.update({ bookingReminders }, { where: { id: req.user!.id }, transaction }));
+          res.json({ bookingReminders });
+        },
+      ],
+    },
+    {
+      method: 'get', path: '/api/bookings/:id', access: 'signed-in', summary: 'One drop-off booking',
+      handlers: [
+        validate({ params: IdParamSchema }),
+        async (req, res) => {
+          res.json({ booking: await service.getBooking(req.user!, Number(req.params.id)) });
+        },
+      ],
+    },
+    {
+      method: 'patch', path: '/api/bookings/:id', access: 'signed-in', summary: 'Move a drop-off to another slot or change its blankets',
+      handlers: [
+        validate({ params: IdParamSchema, body: BookingUpdateSchema }),
+        async (req, res) => {
+          res.json({ booking: await service.moveBooking(bctx, req.user!, Number(req.params.id), req.body) });
+        },
+      ],
+    },
+    {
+      method: 'delete', path: '/api/bookings/:id', access: 'signed-in', summary: 'Cancel a drop-off; its blankets are finished again',
+      handlers: [
+        validate({ params: IdParamSchema }),
+        async (req, res) => {
+          res.json({ booking: await service.cancelBooking(bctx, req.user!, Number(req.params.id)) });
+        },
+      ],
+    },
+  ];
+}
