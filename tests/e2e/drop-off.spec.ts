@@ -68,3 +68,30 @@ test('a maker books a drop-off on the map; the invitation arrives and the organi
   await expect(visit).toBeVisible();
   await shot(page, 'drop-off-day-phone');
 });
+
+test('a coordinator edits a site\'s opening hours, visits per slot and closures', async ({ page }) => {
+  await page.setViewportSize({ width: 1280, height: 900 });
+  await signIn(page, 'coordinator');
+  await page.goto('/sites');
+  await page.getByRole('button', { name: 'Opening hours of Millrace Community Hall' }).click();
+  const form = page.getByRole('form', { name: 'Opening hours of Millrace Community Hall' });
+  await form.getByRole('button', { name: 'Add hours on Sunday' }).click();
+  await form.getByLabel('Sunday span 1 opens').fill('11:00');
+  await form.getByLabel('Sunday span 1 closes').fill('13:00');
+  await form.getByLabel('Visits per slot').fill('5');
+  await shot(page, 'sites-hours-editor');
+  await form.getByRole('button', { name: 'Save the hours' }).click();
+  const card = page.getByRole('listitem').filter({ hasText: 'Millrace Community Hall' });
+  await expect(card.getByTestId('site-hours')).toContainText('Sun 11:00–13:00');
+  await expect(card.getByTestId('site-hours')).toContainText('5 visits each');
+
+  // Overlapping spans are refused with the reason, and nothing is lost.
+  await page.getByRole('button', { name: 'Opening hours of Millrace Community Hall' }).click();
+  await form.getByRole('button', { name: 'Add hours on Sunday' }).click();
+  await form.getByLabel('Sunday span 2 opens').fill('12:00');
+  await form.getByLabel('Sunday span 2 closes').fill('14:00');
+  await form.getByRole('button', { name: 'Save the hours' }).click();
+  await expect(form.getByRole('alert')).toContainText('overlap');
+  await page.setViewportSize({ width: 390, height: 844 });
+  await shot(page, 'sites-hours-phone');
+});

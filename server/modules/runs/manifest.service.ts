@@ -37,21 +37,22 @@ type Row = ManifestSourceRow & { blanketId: number };
 /**
  * A run's manifest, stop by stop in driving order, box by box, read a page at a time by keyset
  * (box, blanket) on the index that orders them, so memory stays flat however many rows there are.
+ * The stop's own columns are read once per stop: joined into the page query, SQLite's planner put the
+ * one-row tables in the outer loop and sorted every remaining row for each page.
  */
 async function* runRows(sequelize: Sequelize, runId: number, pageSize: number): AsyncGenerator<ManifestRecord> {
-  const stops = await sequelize.query<{ id: number }>('SELECT id FROM run_stops WHERE runId = ? ORDER BY position ASC', {
-    replacements: [runId],
-    type: QueryTypes.SELECT,
-  });
+  const stops = await sequelize.query<{ id: number; position: number; runDate: string; recipient: string; address: string }>(
+    `SELECT s.id, s.position, run.runDate, rc.name AS recipient, rc.address
+       FROM run_stops s JOIN runs run ON run.id = s.runId JOIN recipients rc ON rc.id = s.recipientId
+      WHERE s.runId = ? ORDER BY s.position ASC`,
+    { replacements: [runId], type: QueryTypes.SELECT },
+  );
   for (const stop of stops) {
     let after = { box: 0, blanketId: 0 };
     for (;;) {
-      const rows = await sequelize.query<Row & { itemBox: number }>(
-        `SELECT run.runDate, s.position, rc.name AS recipient, rc.address, rb.box, ${COLUMNS}
+      const rows = await sequelize.query<Row>(
+        `SELECT rb.box, ${COLUMNS}
            FROM run_blankets rb
-           JOIN run_stops s ON s.id = rb.stopId
-           JOIN runs run ON run.id = rb.runId
-           JOIN recipients rc ON rc.id = s.recipientId
            JOIN blankets b ON b.id = rb.blanketId
            ${CHECKED_JOIN}
           WHERE rb.stopId = :stopId AND (rb.box, rb.blanketId) > (:box, :blanketId)
@@ -59,7 +60,7 @@ async function* runRows(sequelize: Sequelize, runId: number, pageSize: number): 
           LIMIT :limit`,
         { replacements: { stopId: stop.id, ...after, limit: pageSize }, type: QueryTypes.SELECT },
       );
-      for (const r of rows) yield manifestRecord(r);
+      for (const r of rows) yield manifestRecord({ ...r, runDate: stop.runDate, position: stop.position, recipient: stop.recipient, address: stop.address });
       if (rows.length < pageSize) break;
       const last = rows[rows.length - 1]!;
       after = { box: last.box ?? 0, blanketId: last.blanketId };
@@ -69,12 +70,16 @@ async function* runRows(sequelize: Sequelize, runId: number, pageSize: number): 
 
 /** Everything given to one recipient (assigned, packed or delivered), with its run and box where it has one. */
 async function* recipientRows(sequelize: Sequelize, recipientId: number, pageSize: number): AsyncGenerator<ManifestRecord> {
+  const [rc] = await sequelize.query<{ name: string; address: string }>('SELECT name, address FROM recipients WHERE id = ?', {
+    replacements: [recipientId],
+    type: QueryTypes.SELECT,
+  });
+  if (!rc) return;
   let after = 0;
   for (;;) {
     const rows = await sequelize.query<Row>(
-      `SELECT run.runDate, s.position, rc.name AS recipient, rc.address, rb.box, ${COLUMNS}
+      `SELECT run.runDate, s.position, rb.box, ${COLUMNS}
          FROM blankets b
-         JOIN recipients rc ON rc.id = b.recipientId
          LEFT JOIN run_blankets rb ON rb.blanketId = b.id
          LEFT JOIN run_stops s ON s.id = rb.stopId
          LEFT JOIN runs run ON run.id = rb.runId
@@ -84,7 +89,7 @@ async function* recipientRows(sequelize: Sequelize, recipientId: number, pageSiz
         LIMIT :limit`,
       { replacements: { recipientId, statuses: [...ASSIGNED_STATUSES], after, limit: pageSize }, type: QueryTypes.SELECT },
     );
-    for (const r of rows) yield manifestRecord(r);
+    for (const r of rows) yield manifestRecord({ ...r, recipient: rc.name, address: rc.address });
     if (rows.length < pageSize) break;
     after = rows[rows.length - 1]!.blanketId;
   }

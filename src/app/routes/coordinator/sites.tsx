@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { MapPin, Pencil, Plus } from 'lucide-react';
+import { Clock, MapPin, Pencil, Plus } from 'lucide-react';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardTitle } from '@/components/ui/card';
 import { Badge } from '@/components/ui/badge';
@@ -11,11 +11,13 @@ import { PinMap } from '@/components/ui/pin-map';
 import { useSites } from '@/features/sites/api/get-sites';
 import { useSaveSite } from '@/features/sites/api/save-site';
 import { SiteForm, TOWN_CENTRE } from '@/features/sites/components/site-form';
+import { ScheduleForm, hoursSummary } from '@/features/sites/components/schedule-form';
 
 export default function SitesPage() {
   const { data, isPending, error } = useSites('all');
   const save = useSaveSite();
   const [editing, setEditing] = useState<number | 'new' | null>(null);
+  const [hoursOf, setHoursOf] = useState<number | null>(null);
   const done = () => {
     setEditing(null);
     save.reset();
@@ -56,7 +58,9 @@ export default function SitesPage() {
                 {data.map((s) => (
                   <li key={s.id}>
                     <Card className="h-full">
-                      {editing === s.id ? (
+                      {hoursOf === s.id ? (
+                        <ScheduleForm site={s} onDone={() => setHoursOf(null)} />
+                      ) : editing === s.id ? (
                         <SiteForm site={s} others={data} busy={save.isPending} error={save.error} onCancel={done} onSubmit={(input) => save.mutate({ id: s.id, ...input }, { onSuccess: done })} />
                       ) : (
                         <>
@@ -66,9 +70,19 @@ export default function SitesPage() {
                           </div>
                           <p className="text-ink-soft">{s.address}</p>
                           {s.notes && <p className="mt-2">{s.notes}</p>}
-                          <Button size="sm" variant="quiet" className="mt-3" onClick={() => setEditing(s.id)} aria-label={`Change ${s.name}`}>
-                            <Pencil className="size-4" aria-hidden /> Change
-                          </Button>
+                          <p className="mt-2 text-sm" data-testid="site-hours">
+                            <Clock className="mr-1 inline size-4" aria-hidden />
+                            {hoursSummary(s.openingHours)} · {s.slotMinutes}-minute slots, {s.slotCapacity} {s.slotCapacity === 1 ? 'visit' : 'visits'} each
+                            {s.closures.length > 0 && ` · ${s.closures.length} ${s.closures.length === 1 ? 'closure' : 'closures'}`}
+                          </p>
+                          <div className="mt-3 flex flex-wrap gap-2">
+                            <Button size="sm" variant="quiet" onClick={() => setEditing(s.id)} aria-label={`Change ${s.name}`}>
+                              <Pencil className="size-4" aria-hidden /> Change
+                            </Button>
+                            <Button size="sm" variant="secondary" onClick={() => setHoursOf(s.id)} aria-label={`Opening hours of ${s.name}`}>
+                              <Clock className="size-4" aria-hidden /> Opening hours
+                            </Button>
+                          </div>
                         </>
                       )}
                     </Card>

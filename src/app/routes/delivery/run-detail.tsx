@@ -17,14 +17,16 @@ import { StopCard } from '@/features/runs/components/stop-card';
 import { km, RunStateBadge } from '@/features/runs/components/run-state-badge';
 import type { RunView } from '@shared/schemas/run';
 
+/** Stops first, so the map's numbers are the stop numbers; the start site comes last. */
 function pinsOf(run: RunView): MapPin[] {
   const pins: MapPin[] = [];
-  const s = run.startSite;
-  if (s.lat !== null && s.lng !== null) pins.push({ id: 'start', lat: s.lat, lng: s.lng, label: `Start: ${s.name}`, kind: 'site' });
+  const allPinned = run.unpinned.length === 0;
   for (const stop of run.stops) {
     const r = stop.recipient;
-    if (r.lat !== null && r.lng !== null) pins.push({ id: stop.id, lat: r.lat, lng: r.lng, label: `${stop.position}. ${r.name}`, kind: 'recipient' });
+    if (r.lat !== null && r.lng !== null) pins.push({ id: stop.id, lat: r.lat, lng: r.lng, label: allPinned ? r.name : `Stop ${stop.position}: ${r.name}`, kind: 'recipient' });
   }
+  const s = run.startSite;
+  if (s.lat !== null && s.lng !== null) pins.push({ id: 'start', lat: s.lat, lng: s.lng, label: `Start and finish: ${s.name}`, kind: 'site' });
   return pins;
 }
 
