@@ -55,3 +55,12 @@ test('a maker prints several tags at once from My blankets, and a tag that is no
   await page.goto('/tags?ids=1;2');
   await expect(page.getByText('No blankets chosen')).toBeVisible();
 });
+
+test('a pledge whose blanket was declined says so and still offers to log another', async ({ page }) => {
+  await signIn(page, 'dev@example.org');
+  await page.goto('/pledges');
+  const pledge = page.getByRole('region', { name: /Kestrel Rise Hospice/ }).first();
+  await expect(pledge).toContainText('1 declined at intake (not counted)');
+  await expect(pledge.getByRole('link', { name: 'Log a blanket' })).toBeVisible();
+  await shot(page, 'maker-declined-pledge');
+});

@@ -95,7 +95,7 @@ export function authRoutes(ctx: service.AuthContext & { passport: PassportStatic
       handlers: [(req, res) => res.json({ csrfToken: csrfToken(req) })],
     },
     {
-      method: 'post', path: '/api/auth/register', access: 'public', summary: 'Create a volunteer account and sign in',
+      method: 'post', path: '/api/auth/register', access: 'public', summary: "Create a maker's account and sign in",
       handlers: [
         limits.registerPerAddress,
         limits.registerFailuresPerAddress,

@@ -217,7 +217,7 @@ export async function deleteNeed(recipientId: number, needId: number): Promise<v
     // Deleting would quietly turn volunteers' pledges into "wherever it's needed most".
     throw new HttpError(
       409,
-      `Volunteers have pledged ${pledged} blanket${pledged === 1 ? '' : 's'} against this need; lower its quantity or move the pledges first`,
+      `Makers have pledged ${pledged} blanket${pledged === 1 ? '' : 's'} against this need; lower its quantity or move the pledges first`,
     );
   }
   await need.destroy();

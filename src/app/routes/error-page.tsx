@@ -1,8 +1,10 @@
 import { isRouteErrorResponse, Link, useRouteError } from 'react-router-dom';
+import { useDocumentTitle } from '@/components/ui/document-title';
 
 /** Shown when a page fails to load or render; it keeps its own simple frame in case the shell is what failed. */
 export function ErrorPage() {
   const error = useRouteError();
+  useDocumentTitle('Something went wrong');
   const message = isRouteErrorResponse(error) ? `${error.status} ${error.statusText}` : error instanceof Error ? error.message : 'Unknown error';
   return (
     <div className="mx-auto max-w-xl px-4 py-16">

@@ -16,7 +16,7 @@ export function Alert({ kind = 'info', title, children, className }: { kind?: Ki
   return (
     <div role={kind === 'error' ? 'alert' : 'status'} className={cn('flex gap-3 rounded-xl border-2 p-4', styles[kind], className)}>
       <Icon className="mt-0.5 size-6 shrink-0" aria-hidden />
-      <div className="space-y-1">
+      <div className="min-w-0 flex-1 space-y-1">
         {title && <p className="font-bold">{title}</p>}
         {children && <div className="text-ink">{children}</div>}
       </div>

@@ -11,6 +11,10 @@ const tones: Record<Tone, string> = {
   sky: 'bg-sky-100 text-sky-700 border-sky-700/30',
 };
 
-export function Badge({ tone = 'neutral', children, className }: { tone?: Tone; children: ReactNode; className?: string }) {
-  return <span className={cn('inline-flex items-center gap-1 rounded-full border px-2.5 py-0.5 text-sm font-bold', tones[tone], className)}>{children}</span>;
+export function Badge({ tone = 'neutral', children, className, ...data }: { tone?: Tone; children: ReactNode; className?: string; [key: `data-${string}`]: string }) {
+  return (
+    <span {...data} data-tone={tone} className={cn('inline-flex items-center gap-1 rounded-full border px-2.5 py-0.5 text-sm font-bold', tones[tone], className)}>
+      {children}
+    </span>
+  );
 }

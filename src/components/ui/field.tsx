@@ -1,8 +1,9 @@
 import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 import { cn } from './cn';
 
+/* A focused control shows a 3 px dark outline (WCAG 2.2, 2.4.7 and 2.4.13), not just a border change. */
 const control =
-  'block w-full rounded-xl border-2 border-oat-300 bg-white px-3 py-2 text-ink placeholder:text-ink-soft/70 focus:border-heather-500 focus:outline-none aria-[invalid=true]:border-brick-500 min-h-11';
+  'block w-full rounded-xl border-2 border-oat-300 bg-white px-3 py-2 text-ink placeholder:text-ink-soft/70 focus:border-heather-700 focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-heather-700 aria-[invalid=true]:border-brick-500 min-h-11';
 
 interface FieldProps {
   label: ReactNode;

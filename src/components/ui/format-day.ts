@@ -14,3 +14,12 @@ export function isoDayFromToday(days = 0): string {
 export function daysUntil(iso: string): number {
   return Math.round((Date.parse(`${iso}T00:00:00Z`) - Date.parse(`${isoDayFromToday()}T00:00:00Z`)) / 86_400_000);
 }
+
+/** A moment in words with its time, e.g. "6 Jan 2027, 14:05", in the reader's own clock. */
+export function formatMoment(iso: string): string {
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  const day = d.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+  const time = d.toLocaleTimeString('en-GB', { hour: '2-digit', minute: '2-digit' });
+  return `${day}, ${time}`;
+}

@@ -1,6 +1,8 @@
 import type { ReactNode } from 'react';
+import { useDocumentTitle } from './document-title';
 
 export function PageHeader({ title, lead, actions }: { title: string; lead?: ReactNode; actions?: ReactNode }) {
+  useDocumentTitle(title);
   return (
     <header className="mb-6 flex flex-wrap items-end justify-between gap-4">
       <div className="max-w-3xl">

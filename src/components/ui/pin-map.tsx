@@ -182,24 +182,32 @@ export function PinMap({ pins, fallbackCentre, onPick, label, className, onSelec
           <FitToPins pins={pins} fallback={fallbackCentre} />
           {onPick && <PickOnClick onPick={onPick} />}
           {numbered.map((p) => (
+            // Pins are labels, not buttons, unless the map selects by pin: two places in one building
+            // would otherwise be two targets on top of each other (WCAG 2.5.8). The name shows on
+            // hover and in the list below.
             <Marker
               // A tooltip's permanence is fixed when it mounts, so a newly selected pin mounts anew.
               key={`${p.id}:${p.selected ? 'on' : 'off'}`}
               position={[p.lat, p.lng]}
+              // Only a map that selects by pin makes its pins buttons; elsewhere they are labels.
+              interactive={!!onSelect}
+              keyboard={!!onSelect}
               eventHandlers={onSelect ? { click: () => onSelect(p.id) } : undefined}
-              title={p.label}
+              title={onSelect ? p.label : undefined}
               alt={`${p.n}: ${p.label}`}
               zIndexOffset={p.selected ? 1000 : 0}
               icon={divIcon({
                 className: cn('kl-pin', `kl-pin-${p.selected ? 'selected' : (p.kind ?? 'recipient')}`),
-                html: `<span data-testid="map-pin" data-label="${escapeHtml(p.label)}">${p.n}</span>`,
+                html: `<span data-testid="map-pin" title="${escapeHtml(`${p.n}: ${p.label}`)}">${p.n}</span>`,
                 iconSize: p.selected ? [34, 34] : [28, 28],
                 iconAnchor: p.selected ? [17, 17] : [14, 14],
               })}
             >
-              <Tooltip direction="top" offset={[0, -14]} permanent={p.selected}>
-                {p.label}
-              </Tooltip>
+              {p.selected && (
+                <Tooltip direction="top" offset={[0, -14]} permanent>
+                  {p.label}
+                </Tooltip>
+              )}
             </Marker>
           ))}
         </MapContainer>

@@ -1,7 +1,9 @@
 import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
+import { useDocumentTitle } from '@/components/ui/document-title';
 
 export function AuthCard({ title, lead, children }: { title: string; lead?: ReactNode; children: ReactNode }) {
+  useDocumentTitle(title);
   return (
     <div className="mx-auto max-w-lg">
       <Card>

@@ -12,13 +12,14 @@ import { Checkbox } from '@/components/ui/field';
 import { useIntakeSites } from '@/features/intake/api/get-intake-sites';
 import { useIntakeQueue } from '@/features/intake/api/get-intake-queue';
 import { rememberedSiteId } from '@/features/intake/components/receive-panel';
-import { StatusBadge, categoryText } from '@/features/intake/components/blanket-summary';
+import { categoryText } from '@/features/intake/components/blanket-summary';
+import { StatusBadge } from '@/components/ui/status-badge';
 import { formatCm } from '@shared/guidelines/wording';
 import type { IntakeQueueItem } from '@shared/schemas/intake-views';
 import { pageCount } from '@shared/schemas/page';
 
 const localDay = (d = new Date()) => `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
-const time = (iso: string | null) => (iso ? new Date(iso).toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' }) : '');
+const time = (iso: string | null) => (iso ? new Date(iso).toLocaleTimeString('en-GB', { hour: '2-digit', minute: '2-digit' }) : '');
 
 interface Paging {
   total: number;

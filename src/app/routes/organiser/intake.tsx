@@ -11,8 +11,9 @@ import { QueryError } from '@/components/ui/query-error';
 import { Cautions } from '@/components/ui/cautions';
 import { ApiError } from '@/lib/api-client';
 import { useBlanketByCode } from '@/features/intake/api/get-blanket-by-code';
-import { BlanketSummary, StatusBadge } from '@/features/intake/components/blanket-summary';
-import { BlanketHistory } from '@/features/intake/components/blanket-history';
+import { BlanketSummary } from '@/features/intake/components/blanket-summary';
+import { StatusBadge } from '@/components/ui/status-badge';
+import { BlanketHistory } from '@/components/ui/blanket-history';
 import { ReceivePanel } from '@/features/intake/components/receive-panel';
 import { InspectionPanel } from '@/features/intake/components/inspection-panel';
 import { CheckResult } from '@/features/intake/components/check-result';
@@ -172,7 +173,7 @@ export default function IntakePage() {
             </Card>
             <Card>
               <CardTitle>History</CardTitle>
-              <BlanketHistory history={b.history} />
+              <BlanketHistory events={b.history} />
             </Card>
             <p className="text-sm">
               <Link to="/organiser/queue">Back to the queue</Link>

@@ -3,8 +3,8 @@ import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { useDrive } from '@/features/drive/api/get-drive';
 import { useMe } from '@/features/auth/api/get-me';
-
-const dateFmt = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' });
+import { formatDay } from '@/components/ui/format-day';
+import { useDocumentTitle } from '@/components/ui/document-title';
 
 const steps = [
   { icon: HeartHandshake, title: 'Pledge', text: 'See what each neonatal unit, ward, shelter and care home needs, and promise what you can make.' },
@@ -18,6 +18,7 @@ export default function HomePage() {
   const { data } = useDrive();
   const { data: user } = useMe();
   const drive = data?.drive;
+  useDocumentTitle(drive ? `${drive.name}, ${drive.town}` : 'Handmade blankets for the drive');
   return (
     <div className="space-y-10">
       <section className="grid items-center gap-8 rounded-3xl bg-heather-800 px-6 py-10 text-white sm:px-10 md:grid-cols-[3fr_2fr]">
@@ -27,7 +28,7 @@ export default function HomePage() {
           <p className="mt-4 max-w-prose text-lg text-heather-50">{drive?.summary ?? 'Kindloop helps community groups run charity blanket drives.'}</p>
           {drive && (
             <p className="mt-4 font-bold text-marigold-300">
-              Blankets wanted until {dateFmt.format(new Date(drive.endsOn))} · {data?.volunteers ?? 0} makers so far
+              Blankets wanted until {formatDay(drive.endsOn)} · {data?.volunteers ?? 0} makers so far
             </p>
           )}
           <div className="mt-6 flex flex-wrap gap-3">

@@ -13,13 +13,13 @@ import { pledgeKeys } from '@/features/pledges/api/keys';
 import { useSites } from '@/features/sites/api/get-sites';
 import { useBlanket } from '@/features/blankets/api/get-blanket';
 import { StatusTimeline } from '@/features/blankets/components/status-timeline';
-import { StatusBadge } from '@/features/blankets/components/status-badge';
+import { StatusBadge } from '@/components/ui/status-badge';
 import { StatusActions } from '@/features/blankets/components/status-actions';
 import { SelfCheckPanel } from '@/features/blankets/components/self-check-panel';
 import { PhotoGallery } from '@/features/blankets/components/photo-gallery';
-import { BlanketHistory } from '@/features/blankets/components/blanket-history';
+import { BlanketHistory } from '@/components/ui/blanket-history';
 import { InspectionFindings } from '@/features/blankets/components/inspection-findings';
-import { BODY_STITCH_LABELS, sizeLabel, yarnWeightLabel } from '@/features/blankets/components/labels';
+import { BODY_STITCH_LABELS, NO_LIBRARY_BORDER, sizeLabel, yarnWeightLabel } from '@/features/blankets/components/labels';
 import type { SelfCheck } from '@/features/blankets/hooks/use-self-check';
 import type { BlanketDetail } from '@shared/schemas/blanket-log';
 import { borderById } from '@shared/border/library';
@@ -53,7 +53,7 @@ function Details({ b, isMaker }: { b: BlanketDetail; isMaker: boolean }) {
     ['New yarn', yes(b.newYarn)],
     ['Colours', b.colours || '—'],
     ['Body stitch', BODY_STITCH_LABELS[b.bodyStitch] ?? b.bodyStitch],
-    ['Border', b.borderId ? (borderById(b.borderId)?.name ?? b.borderId) : 'None from the library'],
+    ['Border', b.borderId ? (borderById(b.borderId)?.name ?? b.borderId) : NO_LIBRARY_BORDER],
     ['Trims', b.features.length ? capitalise(joinWords(b.features.map(featureLabel))) : 'None'],
     ['Machine washable', yes(b.machineWashable)],
     ['Dryer safe', yes(b.dryerSafe)],
@@ -133,9 +133,10 @@ export default function BlanketDetailPage() {
       />
       {state.logged && (
         <Alert kind="success" title="Saved. Thank you!">
-          <span className="flex items-center gap-2">
-            <Tag className="size-5" aria-hidden /> Write <strong className="font-mono text-lg" data-testid="new-code">{b.code}</strong> on its tag (or use <Link to={`/tags?ids=${b.id}`}>Print its tag</Link>), so the organisers can find it in the log.
-          </span>
+          {/* Plain flowing text: as flex items the words, code and link became narrow columns on a phone. */}
+          <p>
+            <Tag className="mr-1 inline size-5 align-text-bottom" aria-hidden /> Write <strong className="font-mono text-lg" data-testid="new-code">{b.code}</strong> on its tag (or use <Link to={`/tags?ids=${b.id}`}>Print its tag</Link>), so the organisers can find it in the log.
+          </p>
         </Alert>
       )}
       {state.photoError && (
@@ -179,7 +180,7 @@ export default function BlanketDetailPage() {
           </Card>
         </div>
         <div className="space-y-6">
-          <SelfCheckPanel outcome={outcomeOf(b)} cautions={b.cautions} notes={selfCheckNotes(b)} />
+          <SelfCheckPanel outcome={outcomeOf(b)} cautions={b.cautions} notes={selfCheckNotes(b)} viewer={isMaker ? 'maker' : 'staff'} />
           <Card>
             <CardTitle>History</CardTitle>
             <BlanketHistory events={b.events} />

@@ -12,6 +12,7 @@ import type { AssignmentView, BoardNeed } from '@shared/schemas/assignment';
 import { useNeedAssignments } from '../api/get-need-assignments';
 import { useReassign, useUnassign } from '../api/assign-blankets';
 import { URGENCY, needLabel, sizeText } from './words';
+import { formatDay } from '@/components/ui/format-day';
 
 function AssignedRow({ a, needs }: { a: AssignmentView; needs: BoardNeed[] }) {
   const [reason, setReason] = useState('');
@@ -27,7 +28,7 @@ function AssignedRow({ a, needs }: { a: AssignmentView; needs: BoardNeed[] }) {
         <span className="font-mono font-bold tracking-wider">{a.blanketCode}</span>
         <span className="text-ink-soft">
           {' '}
-          · assigned {new Date(a.assignedAt).toLocaleDateString()}
+          · assigned {formatDay(a.assignedAt)}
           {a.assignedBy ? ` by ${a.assignedBy.name}` : ''}
           {a.source === 'suggestion' ? ' from the suggestion' : ''}
         </span>

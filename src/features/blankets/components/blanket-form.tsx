@@ -17,7 +17,7 @@ import { capitalise, featureLabel, fibreLabel } from '@shared/guidelines/wording
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import type { PlanListItem } from '@shared/schemas/plan';
 import { BlanketFormSchema, SERVER_FIELD_RENAMES, guidelineFields, inUnit, cmFrom, type BlanketFormValues } from './blanket-form-schema';
-import { BODY_STITCH_LABELS, yarnWeightLabel } from './labels';
+import { BODY_STITCH_LABELS, yarnWeightLabel, NO_LIBRARY_BORDER } from './labels';
 import { useSelfCheck } from '../hooks/use-self-check';
 import { SelfCheckPanel } from './self-check-panel';
 import { PhotoPicker, photoProblems } from './photo-picker';
@@ -211,7 +211,7 @@ export function BlanketForm({ mode, pledges, defaultValues, otherRecipients, pla
             <Field label="Border" error={e.borderId?.message}>
               {({ id, describedBy, invalid }) => (
                 <Select id={id} aria-describedby={describedBy} aria-invalid={invalid} {...register('borderId')}>
-                  <option value="">No border, or one of my own</option>
+                  <option value="">{NO_LIBRARY_BORDER}</option>
                   {BORDER_LIBRARY.map((b) => (
                     <option key={b.id} value={b.id}>
                       {b.name}

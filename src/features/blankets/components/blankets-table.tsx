@@ -14,7 +14,7 @@ import { QueryError } from '@/components/ui/query-error';
 import { useBlankets } from '../api/get-blankets';
 import { STATUS_LABELS } from '@shared/blankets/status';
 import { formatCm } from '@shared/guidelines/wording';
-import { StatusBadge } from './status-badge';
+import { StatusBadge } from '@/components/ui/status-badge';
 import { StatusTimeline } from './status-timeline';
 
 const col = createColumnHelper<BlanketSummary>();

@@ -23,3 +23,6 @@ export const yarnWeightLabel = (w: number) => {
 };
 
 export const sizeLabel = (c: SizeCategory | null) => (c ? capitalise(sizeCategoryRow(c).label) : 'Any size');
+
+/** The form's choice and the blanket's page say the same thing when no library border was used. */
+export const NO_LIBRARY_BORDER = 'No border, or one of my own';

@@ -22,18 +22,21 @@ export function SelfCheckPanel({
   outcome,
   cautions = [],
   className,
+  viewer = 'maker',
   notes = [],
 }: {
   outcome: SelfCheck;
   cautions?: Caution[];
   className?: string;
+  /** The maker checks their own work; organisers see the same check on what the maker logged. */
+  viewer?: 'maker' | 'staff';
   /** What the reader should know about what was checked, e.g. that it used the size measured at intake. */
   notes?: string[];
 }) {
   return (
     <section aria-labelledby="self-check-title" aria-live="polite" className={cn('space-y-4 rounded-2xl border-2 border-heather-300 bg-white p-5', className)} data-testid="self-check">
       <h2 id="self-check-title" className="flex items-center gap-2 text-xl font-bold">
-        <ClipboardCheck className="size-6 text-heather-700" aria-hidden /> Self-check
+        <ClipboardCheck className="size-6 text-heather-700" aria-hidden /> {viewer === 'maker' ? 'Self-check' : 'Guideline check on what the maker logged'}
       </h2>
       {outcome.state === 'incomplete' && <p className="text-ink-soft">Fill in {joinWords(outcome.missing)} and the check will tell you whether it meets the guidelines.</p>}
 

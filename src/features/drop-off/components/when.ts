@@ -8,7 +8,8 @@ export function dayIn(iso: string, zone: string, opts: { weekday?: 'long' | 'sho
     timeZone: zone,
     weekday: opts.weekday ?? 'long',
     day: 'numeric',
-    month: 'long',
+    // The app's one date format: "6 Jan 2027" (see components/ui/format-day), here in the drive's zone.
+    month: 'short',
     ...(opts.year ? { year: 'numeric' } : {}),
   }).format(new Date(iso));
 }

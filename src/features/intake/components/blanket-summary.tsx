@@ -1,26 +1,8 @@
-import { Badge, type Tone } from '@/components/ui/badge';
-import { STATUS_LABELS } from '@shared/blankets/status';
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import { featureLabel, fibreLabel, formatCm, formatIn, yarnWeightName } from '@shared/guidelines/wording';
-import type { BlanketStatus, Feature, Fibre, SizeCategory } from '@shared/schemas/blanket';
+import type { Feature, Fibre, SizeCategory } from '@shared/schemas/blanket';
 import type { IntakeBlanketView } from '@shared/schemas/intake-views';
 
-const STATUS_TONES: Record<BlanketStatus, Tone> = {
-  in_progress: 'neutral',
-  finished: 'sky',
-  booked: 'sky',
-  received: 'marigold',
-  checked: 'moss',
-  needs_fix: 'brick',
-  declined: 'brick',
-  assigned: 'heather',
-  packed: 'heather',
-  delivered: 'moss',
-};
-
-export function StatusBadge({ status }: { status: BlanketStatus }) {
-  return <Badge tone={STATUS_TONES[status]}>{STATUS_LABELS[status]}</Badge>;
-}
 
 export const sizeText = (w: number, l: number) => `${formatCm(w)} × ${formatCm(l)} cm (about ${formatIn(w)} × ${formatIn(l)} in)`;
 

@@ -14,8 +14,8 @@ import { usePlans } from '../api/get-plans';
 import { planQueryOptions } from '../api/get-plan';
 import { useCreatePlan } from '../api/create-plan';
 import { useDeletePlan } from '../api/delete-plan';
+import { formatDay } from '@/components/ui/format-day';
 
-const dateFmt = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 
 interface Props {
   signedIn: boolean;
@@ -122,7 +122,7 @@ function SignedInPlans({ input, suggestedName, onLoad }: Omit<Props, 'signedIn'>
                   <p className="font-bold">{p.name}</p>
                   <p className="text-ink-soft">{p.summary.text}</p>
                   <p className="text-sm text-ink-soft">
-                    Saved {dateFmt.format(new Date(p.updatedAt))}
+                    Saved {formatDay(p.updatedAt)}
                     {p.blankets > 0 ? ` · attached to ${p.blankets} blanket${p.blankets === 1 ? '' : 's'}` : ''}
                   </p>
                 </div>

@@ -104,7 +104,7 @@ export function PledgeCard({ pledge, onChanged }: { pledge: PledgeView; onChange
         </div>
       </div>
       {open && (
-        <ProgressBar value={pledge.quantity ? pledge.blanketsFinished / pledge.quantity : 0} label={`${pledge.blanketsFinished} of ${pledge.quantity} finished · ${pledge.blanketsLogged} logged`} tone="moss" />
+        <ProgressBar value={pledge.quantity ? pledge.blanketsFinished / pledge.quantity : 0} label={`${pledge.blanketsFinished} of ${pledge.quantity} finished · ${pledge.blanketsLogged} logged${pledge.blanketsDeclined > 0 ? ` · ${pledge.blanketsDeclined} declined at intake (not counted)` : ''}`} tone="moss" />
       )}
       {pledge.late && (
         <Alert kind="warning" title="This pledge is past its date">

@@ -1,3 +1,4 @@
+import { useEffect } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button } from '@/components/ui/button';
@@ -34,7 +35,7 @@ const FIELDS = ['needId', 'quantity', 'sizeCategory', 'dueDate'] as const;
 export function PledgeForm({ target, onDone, onChanged, onCancel }: Props) {
   const create = useCreatePledge(onChanged);
   const fourWeeks = isoDayFromToday(28);
-  const { register, handleSubmit, formState, setError } = useForm<PledgeCreate>({
+  const { register, handleSubmit, formState, setError, setFocus } = useForm<PledgeCreate>({
     resolver: zodResolver(PledgeCreateSchema),
     defaultValues: {
       needId: target?.needId ?? null,
@@ -43,6 +44,9 @@ export function PledgeForm({ target, onDone, onChanged, onCancel }: Props) {
       dueDate: target && target.deadline < fourWeeks ? target.deadline : fourWeeks,
     },
   });
+  // Opened from a card's button, the form takes the focus: otherwise a keyboard or screen-reader
+  // user is left on the page body, far from what just appeared.
+  useEffect(() => setFocus('quantity'), [setFocus]);
   const onSubmit = handleSubmit((values) =>
     create.mutate(values, {
       onSuccess: (p) => onDone?.(p),

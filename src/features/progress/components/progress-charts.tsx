@@ -3,7 +3,7 @@ import { BarChart3 } from 'lucide-react';
 import { Card, CardTitle } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import type { DriveProgress } from '@shared/schemas/pledge';
-import { recipientProgress, statusCounts } from './progress-data';
+import { recipientProgress, statusCounts, wrapName } from './progress-data';
 
 const COLOURS = {
   wanted: 'var(--color-sky-700)',
@@ -16,6 +16,25 @@ const COLOURS = {
 };
 
 const axis = { fontSize: 14, fill: 'var(--color-ink)' };
+
+/** The y-axis label: the name wrapped rather than cut, with the full name on hover. */
+function NameTick({ x, y, payload }: { x?: number; y?: number; payload?: { value: string } }) {
+  const name = payload?.value ?? '';
+  const lines = wrapName(name);
+  const lineHeight = 14;
+  return (
+    <g transform={`translate(${x ?? 0},${y ?? 0})`} data-testid="chart-name">
+      <title>{name}</title>
+      <text textAnchor="end" fontSize={12} fill="var(--color-ink)" dy={-((lines.length - 1) * lineHeight) / 2 + 4}>
+        {lines.map((line, i) => (
+          <tspan key={i} x={-4} dy={i === 0 ? 0 : lineHeight}>
+            {line}
+          </tspan>
+        ))}
+      </text>
+    </g>
+  );
+}
 
 /** Charts of the drive for organisers and the coordinator, each with the same figures as a table for screen readers. */
 export function ProgressCharts({ progress }: { progress: DriveProgress }) {
@@ -35,12 +54,13 @@ export function ProgressCharts({ progress }: { progress: DriveProgress }) {
       <Card className="min-w-0">
         <CardTitle>Wanted, pledged, in hand and assigned</CardTitle>
         <p className="mb-3 text-ink-soft">Per recipient: blankets asked for, promised by makers, with the organisers now, and assigned to it.</p>
-        <div aria-hidden className="h-80" data-testid="chart-recipients">
+        {/* Room for each name on up to three lines. */}
+        <div aria-hidden style={{ height: Math.max(320, 56 * perRecipient.length + 90) }} data-testid="chart-recipients">
           <ResponsiveContainer width="100%" height="100%">
             <BarChart accessibilityLayer={false} data={perRecipient} layout="vertical" margin={{ left: 8, right: 16 }}>
               <CartesianGrid strokeDasharray="3 3" horizontal={false} />
               <XAxis type="number" allowDecimals={false} tick={axis} />
-              <YAxis type="category" dataKey="name" width={110} tick={{ ...axis, fontSize: 12 }} tickFormatter={(n: string) => (n.length > 22 ? `${n.slice(0, 21)}…` : n)} />
+              <YAxis type="category" dataKey="name" width={130} interval={0} tick={<NameTick />} />
               <Tooltip />
               <Legend wrapperStyle={{ fontSize: 14 }} formatter={(value: string) => <span style={{ color: 'var(--color-ink)' }}>{value}</span>} />
               <Bar dataKey="wanted" name="Wanted" fill={COLOURS.wanted} isAnimationActive={false} />

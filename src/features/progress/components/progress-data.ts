@@ -27,3 +27,21 @@ export function statusCounts(counts: DriveProgress['statuses']): Array<{ status:
   const by = new Map(counts.map((c) => [c.status, c.count]));
   return ORDER.map((status) => ({ status, label: STATUS_LABELS[status], count: by.get(status) ?? 0 }));
 }
+
+const LINE_CHARS = 20;
+const MAX_LINES = 3;
+
+/** A recipient's name in lines of whole words, at most three; a longer name ends in "…". */
+export function wrapName(name: string, lineChars = LINE_CHARS, maxLines = MAX_LINES): string[] {
+  const lines: string[] = [];
+  for (const word of name.split(/\s+/).filter(Boolean)) {
+    const last = lines[lines.length - 1];
+    if (last !== undefined && (last + ' ' + word).length <= lineChars) lines[lines.length - 1] = `${last} ${word}`;
+    else lines.push(word);
+  }
+  if (lines.length <= maxLines) return lines;
+  const kept = lines.slice(0, maxLines);
+  const tail = kept[maxLines - 1]!;
+  kept[maxLines - 1] = `${tail.length >= lineChars ? tail.slice(0, lineChars - 1) : tail}…`;
+  return kept;
+}

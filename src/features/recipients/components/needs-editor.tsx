@@ -12,6 +12,7 @@ import { NeedCreateSchema, type NeedView } from '@shared/schemas/recipient';
 import { useSaveNeed } from '../api/save-need';
 import { useDeleteNeed } from '../api/delete-need';
 import { fieldErrors, zodErrors } from './field-errors';
+import { formatDay } from '@/components/ui/format-day';
 
 function sizeWords(c: SizeCategory) {
   const row = sizeCategoryRow(c);
@@ -105,7 +106,7 @@ export function NeedsEditor({ recipientId, needs }: { recipientId: number; needs
               <div className="flex flex-wrap items-start justify-between gap-3">
                 <div>
                   <p className="text-lg font-bold">
-                    {n.quantity} × {sizeCategoryRow(n.sizeCategory).label} by {new Date(`${n.deadline}T12:00:00`).toLocaleDateString(undefined, { day: 'numeric', month: 'long', year: 'numeric' })}
+                    {n.quantity} × {sizeCategoryRow(n.sizeCategory).label} by {formatDay(n.deadline)}
                   </p>
                   <p className="text-sm text-ink-soft">{sizeWords(n.sizeCategory)}</p>
                   {n.preferences && <p className="mt-1">{n.preferences}</p>}
