@@ -19,8 +19,8 @@ async function expectAccessible(page: Page, path: string) {
 
 const publicPages = ['/', '/sign-in', '/register', '/forgot-password', '/planner', '/no-such-page'];
 const signedInPages: Record<Who, string[]> = {
-  volunteer: ['/home', '/needs', '/pledges', '/blankets', '/blankets/new'],
-  organiser: ['/home', '/organiser/intake', '/organiser/queue', '/all-blankets', '/recipients'],
+  volunteer: ['/home', '/needs', '/pledges', '/blankets', '/blankets/new', '/drop-off'],
+  organiser: ['/home', '/organiser/intake', '/organiser/queue', '/organiser/drop-offs', '/all-blankets', '/recipients'],
   coordinator: ['/sites', '/people', '/mail'],
 };
 
