@@ -198,7 +198,7 @@ export function PinMap({ pins, fallbackCentre, onPick, label, className, onSelec
               zIndexOffset={p.selected ? 1000 : 0}
               icon={divIcon({
                 className: cn('kl-pin', `kl-pin-${p.selected ? 'selected' : (p.kind ?? 'recipient')}`),
-                html: `<span data-testid="map-pin" title="${escapeHtml(`${p.n}: ${p.label}`)}">${p.n}</span>`,
+                html: `<span data-testid="map-pin" data-label="${escapeHtml(p.label)}" title="${escapeHtml(`${p.n}: ${p.label}`)}">${p.n}</span>`,
                 iconSize: p.selected ? [34, 34] : [28, 28],
                 iconAnchor: p.selected ? [17, 17] : [14, 14],
               })}
