@@ -6,7 +6,7 @@ test('an organiser reads the recipients, edits a guideline set and adds a need',
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Recipients' }).click();
   await expect(page.getByRole('heading', { name: 'Recipients', level: 1 })).toBeVisible();
   await expect(page.getByRole('link', { name: 'Harbour Lantern Family Shelter' })).toBeVisible();
-  await expect(page.getByRole('group', { name: 'Map of the recipients' }).locator('path.leaflet-interactive')).toHaveCount(6);
+  await expect(page.getByRole('group', { name: 'Map of the recipients' }).getByTestId('map-pin')).toHaveCount(6);
   await shot(page, 'recipients-list');
 
   await page.getByRole('link', { name: 'Harbour Lantern Family Shelter' }).click();
@@ -52,7 +52,7 @@ test('a coordinator adds a drop-off site by clicking the map', async ({ page }) 
   await signIn(page, 'coordinator');
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Sites' }).click();
   await expect(page.getByRole('heading', { name: 'Drop-off sites' })).toBeVisible();
-  await expect(page.getByText('Hollyhock Yarn Parlour')).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Hollyhock Yarn Parlour' })).toBeVisible();
   await page.getByRole('button', { name: 'Add a site' }).click();
   await page.getByLabel('Name').fill('Orchard Rise Surgery');
   await page.getByLabel('Address').fill('8 Orchard Rise, Thimbleford');
