@@ -27,14 +27,14 @@ export const STEP_LABELS: Record<GlanceStep, string> = {
   delivered: STATUS_LABELS.delivered,
 };
 
-/** What a step's figure counts, in the words the page and the filtered list use. */
+/** What a step's figure counts, after "now", in the words the page and the filtered list use. */
 export const STEP_MEANS: Record<GlanceStep, string> = {
-  finished: 'finished, not yet handed in (with or without a drop-off booked)',
-  received: 'received at a drop-off point, not yet passed the check (including those waiting for a fix)',
+  finished: 'made, not yet handed in (with or without a drop-off booked)',
+  received: 'at a drop-off point, not yet through the check (including those waiting for a fix)',
   checked: 'passed the check, not yet assigned',
-  assigned: 'assigned to a recipient, not yet packed',
-  packed: 'packed for a delivery run',
-  delivered: 'delivered',
+  assigned: 'given to a recipient, not yet packed',
+  packed: 'in a box for a delivery run',
+  delivered: 'handed over to the recipient',
 };
 
 /** The step a status belongs to, or null for in progress and declined. */

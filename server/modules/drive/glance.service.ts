@@ -1,7 +1,7 @@
 import { Op, QueryTypes } from 'sequelize';
 import { Need } from '../../db/models/need';
 import { Recipient } from '../../db/models/recipient';
-import { GLANCE_STEPS, STEP_STATUSES, riskOf, weekAfter, weekOf, type GlanceStep } from '@shared/drive/glance';
+import { STEP_STATUSES, riskOf, weekAfter, weekOf, type GlanceStep } from '@shared/drive/glance';
 import type { DriveGlance, GlanceNeed, GlanceWeek, StepCounts, WaitingBlanket } from '@shared/schemas/glance';
 import { needCounts, PROMISING_PLEDGE_STATUSES } from '../pledges/need-counts';
 import { todayIso } from '../pledges/recipient-brief';
