@@ -6,6 +6,7 @@ import { BlanketEvent } from '../../server/db/models/blanket-event';
 import { Export, Run } from '../../server/db/models/run';
 import { Need } from '../../server/db/models/need';
 import { Pledge } from '../../server/db/models/pledge';
+import { driveToday } from '../../server/modules/bookings/drive-clock';
 import { Recipient } from '../../server/db/models/recipient';
 import { GLANCE_STEPS, STEP_STATUSES, arrivalMoves, stepOf, weekAfter, weekOf, type GlanceStep } from '@shared/drive/glance';
 import type { BlanketStatus } from '@shared/schemas/blanket';
@@ -54,7 +55,7 @@ describe('the drive at a glance agrees with a recount of the demo drive', () => 
     // The demo has something at most steps, or this would prove little.
     expect(GLANCE_STEPS.filter((s) => glance.totals[s] > 0).length).toBeGreaterThanOrEqual(5);
 
-    const today = day(new Date());
+    const today = await driveToday();
     const open = await Need.findAll({ where: {}, include: [{ model: Recipient, as: 'recipient' }] });
     const openIds = open.filter((n) => n.deadline >= today && n.recipient!.active).map((n) => n.id).sort((a, b) => a - b);
     expect(glance.needs.map((n) => n.needId).sort((a, b) => a - b)).toEqual(openIds);
@@ -68,7 +69,7 @@ describe('the drive at a glance agrees with a recount of the demo drive', () => 
 
   it('wanted and pledged per need, and the needs at risk by the stated rule', async () => {
     const { pledges } = await recount();
-    const today = day(new Date());
+    const today = await driveToday();
     for (const n of glance.needs) {
       const need = (await Need.findByPk(n.needId))!;
       expect(n.wanted).toBe(need.quantity);
@@ -127,7 +128,7 @@ describe('the drive at a glance agrees with a recount of the demo drive', () => 
   });
 
   it('upcoming runs and recent exports', async () => {
-    const today = day(new Date());
+    const today = await driveToday();
     const upcoming = (await Run.findAll()).filter((r) => r.runDate >= today);
     expect(glance.upcomingRuns.total).toBe(upcoming.length);
     expect(glance.upcomingRuns.items.length).toBe(Math.min(5, upcoming.length));

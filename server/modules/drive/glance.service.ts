@@ -4,7 +4,7 @@ import { Recipient } from '../../db/models/recipient';
 import { STEP_STATUSES, riskOf, weekAfter, weekOf, type GlanceStep } from '@shared/drive/glance';
 import type { DriveGlance, GlanceNeed, GlanceWeek, StepCounts, WaitingBlanket } from '@shared/schemas/glance';
 import { needCounts, PROMISING_PLEDGE_STATUSES } from '../pledges/need-counts';
-import { todayIso } from '../pledges/recipient-brief';
+import { driveNow } from '../bookings/drive-clock';
 import { listRuns } from '../runs/runs.service';
 import { listExports } from '../runs/manifest.service';
 import { arrivalStepCase, needOfBlanket, sqlList, stepCase, weekOfSql } from './glance-sql';
@@ -33,9 +33,12 @@ function storedDate(v: string | Date): Date {
  * many were pledged and how many reached each step (from the history); the needs at risk; the
  * blankets waiting longest at each step; the next runs and the latest exports.
  */
-export async function driveGlance(now = new Date()): Promise<DriveGlance> {
+export async function driveGlance(): Promise<DriveGlance> {
   const sequelize = Need.sequelize!;
-  const today = todayIso(now);
+  // Open needs and runs go by the drive's own day; the history's weeks are counted in UTC.
+  const clock = await driveNow();
+  const today = clock.today;
+  const now = new Date(clock.nowMs);
 
   // Open needs of active recipients: the same needs as the home page's charts and "What's needed".
   const needs = await Need.findAll({
@@ -94,7 +97,7 @@ export async function driveGlance(now = new Date()): Promise<DriveGlance> {
       declined: statusCount('declined'),
     },
     needs: glanceNeeds,
-    weeks: await timeline(today),
+    weeks: await timeline(now.toISOString().slice(0, 10)),
     waiting: await waitingLongest(now),
     upcomingRuns: await listRuns({ when: 'upcoming', page: 1, pageSize: 5 }).then((p) => ({ items: p.items, total: p.total })),
     recentExports: await listExports({ page: 1, pageSize: 5 }).then((p) => ({ items: p.items, total: p.total })),
@@ -102,7 +105,7 @@ export async function driveGlance(now = new Date()): Promise<DriveGlance> {
 }
 
 /** Per week: blankets pledged (on promises still standing) and distinct blankets that reached each step. */
-async function timeline(today: string): Promise<GlanceWeek[]> {
+async function timeline(todayUtc: string): Promise<GlanceWeek[]> {
   const sequelize = Need.sequelize!;
   const reached = await sequelize.query<{ week: string; step: GlanceStep; n: number }>(
     `SELECT week, step, COUNT(DISTINCT blanketId) AS n FROM (
@@ -115,7 +118,7 @@ async function timeline(today: string): Promise<GlanceWeek[]> {
     `SELECT ${weekOfSql('createdAt')} AS week, SUM(quantity) AS n FROM pledges WHERE status IN (${sqlList(PROMISING_PLEDGE_STATUSES)}) GROUP BY week`,
     { type: QueryTypes.SELECT },
   );
-  const last = weekOf(today);
+  const last = weekOf(todayUtc);
   const firsts = [...reached.map((r) => r.week), ...pledged.map((r) => r.week)].filter((w) => w <= last).sort();
   if (firsts.length === 0) return [];
   let first = firsts[0]!;
