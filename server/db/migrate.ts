@@ -9,6 +9,7 @@ import * as m0050 from './migrations/0050-assignments';
 import * as m0060 from './migrations/0060-mail-attachments';
 import * as m0061 from './migrations/0061-drop-off-bookings';
 import * as m0070 from './migrations/0070-delivery-runs';
+import * as m0090 from './migrations/0090-thank-you-mail';
 
 /**
  * Migrations are listed here in order rather than globbed, so the same list works under tsx, in
@@ -24,6 +25,7 @@ const migrations = [
   { name: '0060-mail-attachments', ...m0060 },
   { name: '0061-drop-off-bookings', ...m0061 },
   { name: '0070-delivery-runs', ...m0070 },
+  { name: '0090-thank-you-mail', ...m0090 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

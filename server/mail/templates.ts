@@ -72,3 +72,30 @@ export function blanketNeedsFixMail(opts: {
   );
   return { subject: `Blanket ${opts.code}: a small fix, please`, text: lines.join('\n') };
 }
+
+/**
+ * To a maker who asked to hear where their blankets went, once a stop is delivered. It names the
+ * recipient by its public name only: never who signed for the blankets or anyone else at the place.
+ */
+export function deliveryThankYouMail(opts: { name: string; recipientName: string; codes: string[]; appUrl: string }) {
+  const one = opts.codes.length === 1;
+  return {
+    subject: one ? `Your blanket ${opts.codes[0]} has been delivered` : `Your ${opts.codes.length} blankets have been delivered`,
+    text: [
+      `Hello ${opts.name},`,
+      '',
+      `Thank you. ${one ? 'Your blanket has' : 'Your blankets have'} reached ${opts.recipientName}:`,
+      '',
+      ...opts.codes.map((c) => `- ${c}`),
+      '',
+      'Every one was made by hand and checked at the drop-off table before it went. Your blankets and where',
+      'each one went are kept here:',
+      '',
+      appLinks.myBlankets(opts.appUrl),
+      '',
+      'You asked for this message when your blankets are delivered; you can turn it off on the drop-off page.',
+      '',
+      'Kindloop',
+    ].join('\n'),
+  };
+}

@@ -50,6 +50,6 @@ export function allRoutes(ctx: RouteContext): RouteDef[] {
     ...blanketRoutes(ctx.sequelize),
     ...photoRoutes(ctx.sequelize, ctx.config),
     ...assignmentRoutes(ctx.sequelize),
-    ...runRoutes({ sequelize: ctx.sequelize, exportDir: ctx.config.exportDir }),
+    ...runRoutes({ sequelize: ctx.sequelize, exportDir: ctx.config.exportDir, publicUrl: ctx.config.publicUrl }),
   ];
 }

@@ -45,4 +45,8 @@ export const UserUpdateSchema = z
   .object({ role: RoleSchema.optional(), active: z.boolean().optional() })
   .refine((v) => v.role !== undefined || v.active !== undefined, 'Send a role or an active flag');
 
+/** PUT /api/users/me/thank-you-mail: whether a thank-you saying where your blankets went is e-mailed on delivery. */
+export const ThankYouPreferenceSchema = z.object({ thankYouMail: z.boolean({ error: 'thankYouMail must be true or false' }) }).strict();
+export type ThankYouPreference = z.infer<typeof ThankYouPreferenceSchema>;
+
 export const IdParamSchema = z.object({ id: z.coerce.number().int().positive('Not a valid id') });

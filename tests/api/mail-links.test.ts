@@ -49,6 +49,7 @@ const SAMPLES: Record<string, () => { subject: string; text: string }> = {
       measured: { widthCm: 78, lengthCm: 96 },
       appUrl: APP,
     }),
+  deliveryThankYouMail: () => templates.deliveryThankYouMail({ name: 'Ada', recipientName: 'Thimbleford Newborn Unit', codes: ['KL-7Q4M', 'KL-3HXP'], appUrl: APP }),
 };
 
 describe('links in mail', () => {

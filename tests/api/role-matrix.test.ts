@@ -28,6 +28,8 @@ const matrix: Record<string, Row> = {
   'POST /api/auth/password-reset/confirm': PUBLIC,
   'GET /api/users': COORDINATOR,
   'PATCH /api/users/:id': COORDINATOR,
+  'GET /api/users/me/thank-you-mail': SIGNED_IN,
+  'PUT /api/users/me/thank-you-mail': SIGNED_IN,
   'GET /api/mail/caught': COORDINATOR,
   'GET /api/mail/caught/:id': COORDINATOR,
   'GET /api/mail/outbox': COORDINATOR,

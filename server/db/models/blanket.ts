@@ -33,6 +33,8 @@ export class Blanket extends Model<InferAttributes<Blanket>, InferCreationAttrib
   declare labelName: CreationOptional<LabelName>;
   declare notes: CreationOptional<string>;
   declare receivedAt: CreationOptional<Date | null>;
+  /** When its maker's thank-you for its delivery was written to the outbox; null if none was owed yet. */
+  declare thankedAt: CreationOptional<Date | null>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -64,6 +66,7 @@ export function initBlanket(sequelize: Sequelize) {
       labelName: { type: DataTypes.STRING(12), allowNull: false, defaultValue: 'first-name' },
       notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
       receivedAt: { type: DataTypes.DATE, allowNull: true },
+      thankedAt: { type: DataTypes.DATE, allowNull: true },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,

@@ -11,6 +11,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare town: CreationOptional<string | null>;
   /** Whether a reminder goes out the day before each drop-off this person books. */
   declare bookingReminders: CreationOptional<boolean>;
+  /** Whether this person is e-mailed a thank-you saying where their blankets went once delivered (opt-in). */
+  declare thankYouMail: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare version: CreationOptional<number>;
@@ -31,6 +33,7 @@ export function initUser(sequelize: Sequelize) {
       active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
       town: { type: DataTypes.STRING(120), allowNull: true },
       bookingReminders: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+      thankYouMail: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },

@@ -26,8 +26,8 @@ import { listExports, sendExport, streamManifest } from './manifest.service';
 const STAFF: Access = ['organiser', 'coordinator'];
 const COORDINATOR: Access = ['coordinator'];
 
-export function runRoutes(deps: { sequelize: Sequelize; exportDir: string }): RouteDef[] {
-  const { sequelize, exportDir } = deps;
+export function runRoutes(deps: { sequelize: Sequelize; exportDir: string; publicUrl: string }): RouteDef[] {
+  const { sequelize, exportDir, publicUrl } = deps;
   const runId = (p: unknown) => Number((p as { id: string }).id);
   const stopId = (p: unknown) => Number((p as { stopId: string }).stopId);
   return [
@@ -144,7 +144,7 @@ export function runRoutes(deps: { sequelize: Sequelize; exportDir: string }): Ro
       handlers: [
         validate({ params: RunStopParamsSchema, body: DeliverSchema }),
         async (req, res) => {
-          res.json({ run: await service.deliverStop(sequelize, runId(req.params), stopId(req.params), req.body, req.user!) });
+          res.json({ run: await service.deliverStop(sequelize, runId(req.params), stopId(req.params), req.body, req.user!, publicUrl) });
         },
       ],
     },

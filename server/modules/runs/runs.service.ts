@@ -6,6 +6,8 @@ import { Site } from '../../db/models/site';
 import { User } from '../../db/models/user';
 import { HttpError, notFound } from '../../lib/http-error';
 import { moveBlanket } from '../blankets/move-blanket';
+import { enqueueMail } from '../../mail/outbox';
+import { deliveryThankYouMail } from '../../mail/templates';
 import { makerLabel } from '../intake/intake.service';
 import type { Actor } from '../pledges/pledges.service';
 import { cautionsFor } from '@shared/guidelines/cautions';
@@ -469,7 +471,29 @@ export async function unpackStop(sequelize: Sequelize, id: number, stopId: numbe
   return getRun(id);
 }
 
-export async function deliverStop(sequelize: Sequelize, id: number, stopId: number, body: DeliverBody, actor: Actor): Promise<RunView> {
+/**
+ * The thank-you each maker who opted in is owed for this stop: one message per maker, listing their
+ * blankets delivered here that were never thanked for before (a delivery undone and made again
+ * thanks nobody twice). It names the recipient by its public name, never who signed for it.
+ */
+async function thankMakers(stop: { recipient: Recipient; items: Array<RunBlanket & { blanket: Blanket }> }, appUrl: string, transaction: Transaction) {
+  const owed = stop.items.map((i) => i.blanket).filter((b) => b.thankedAt === null);
+  if (owed.length === 0) return;
+  const makers = await User.findAll({
+    where: { id: { [Op.in]: [...new Set(owed.map((b) => b.userId))] }, thankYouMail: true, active: true },
+    attributes: ['id', 'name', 'email'],
+    transaction,
+  });
+  const now = new Date();
+  for (const maker of makers) {
+    const theirs = owed.filter((b) => b.userId === maker.id).sort((a, b) => a.code.localeCompare(b.code));
+    const first = maker.name.trim().split(/\s+/)[0] ?? maker.name;
+    await enqueueMail({ to: maker.email, ...deliveryThankYouMail({ name: first, recipientName: stop.recipient.name, codes: theirs.map((b) => b.code), appUrl }) }, transaction);
+    await Blanket.update({ thankedAt: now }, { where: { id: { [Op.in]: theirs.map((b) => b.id) } }, transaction });
+  }
+}
+
+export async function deliverStop(sequelize: Sequelize, id: number, stopId: number, body: DeliverBody, actor: Actor, appUrl: string): Promise<RunView> {
   await sequelize.transaction(async (transaction) => {
     const run = await runForWrite(id, transaction);
     const stop = await stopForWrite(run, stopId, transaction);
@@ -492,6 +516,7 @@ export async function deliverStop(sequelize: Sequelize, id: number, stopId: numb
     stop.receivedCount = body.receivedCount;
     stop.signedBy = body.signedBy;
     await stop.save({ transaction });
+    await thankMakers(stop, appUrl, transaction);
     await touch(run, transaction);
   });
   return getRun(id);

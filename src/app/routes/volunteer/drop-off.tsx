@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import { BellOff, BellRing, CalendarCheck2, CalendarClock, MapPin, PackageOpen } from 'lucide-react';
+import { BellOff, BellRing, CalendarCheck2, HeartHandshake, MailX, CalendarClock, MapPin, PackageOpen } from 'lucide-react';
 import type { BookingView, SlotView } from '@shared/schemas/booking';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardTitle } from '@/components/ui/card';
@@ -20,6 +20,7 @@ import { useMyBookings } from '@/features/drop-off/api/get-bookings';
 import { useFinishedBlankets } from '@/features/drop-off/api/get-finished-blankets';
 import { useClock } from '@/features/drop-off/api/get-clock';
 import { useReminders, useSetReminders } from '@/features/drop-off/api/reminders';
+import { useSetThankYouMail, useThankYouMail } from '@/features/drop-off/api/thank-you-mail';
 import { useCancelBooking, useCreateBooking, useMoveBooking } from '@/features/drop-off/api/book';
 import { SlotPicker } from '@/features/drop-off/components/slot-picker';
 import { dayIn, isoDayIn, slotLabel, timeIn } from '@/features/drop-off/components/when';
@@ -153,6 +154,7 @@ export default function DropOffPage() {
         )}
         {cancel.error && <Alert kind="error">{cancel.error.message}</Alert>}
         <ReminderToggle />
+        <ThankYouToggle />
       </section>
 
       <section aria-labelledby="book-heading" className="space-y-6">
@@ -280,6 +282,25 @@ function ReminderToggle() {
       {on ? <BellRing className="mt-1.5 size-5 shrink-0 text-heather-700" aria-hidden /> : <BellOff className="mt-1.5 size-5 shrink-0 text-ink-soft" aria-hidden />}
       <Checkbox
         label="E-mail me a reminder the day before each drop-off"
+        checked={on}
+        disabled={set.isPending}
+        onChange={(e) => set.mutate(e.target.checked)}
+      />
+    </div>
+  );
+}
+
+/** The maker's opt-in to hear where their blankets went: the recipient's name, once they are delivered. */
+function ThankYouToggle() {
+  const pref = useThankYouMail();
+  const set = useSetThankYouMail();
+  if (!pref.data) return null;
+  const on = pref.data.thankYouMail;
+  return (
+    <div className="flex items-start gap-3 rounded-xl bg-oat-100 p-3">
+      {on ? <HeartHandshake className="mt-1.5 size-5 shrink-0 text-heather-700" aria-hidden /> : <MailX className="mt-1.5 size-5 shrink-0 text-ink-soft" aria-hidden />}
+      <Checkbox
+        label="E-mail me a thank-you saying where my blankets went once they are delivered"
         checked={on}
         disabled={set.isPending}
         onChange={(e) => set.mutate(e.target.checked)}

@@ -6,5 +6,6 @@ export const dropOffKeys = {
   day: (siteId: number, day: string) => [...dropOffKeys.all, 'day', siteId, day] as const,
   finished: () => [...dropOffKeys.all, 'finished-blankets'] as const,
   reminders: () => [...dropOffKeys.all, 'reminders'] as const,
+  thankYou: () => [...dropOffKeys.all, 'thank-you-mail'] as const,
   clock: () => [...dropOffKeys.all, 'clock'] as const,
 };
