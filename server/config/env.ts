@@ -37,6 +37,8 @@ export const EnvSchema = z.object({
     .optional(),
   /** The credit the tile server's terms ask for, shown on every map; required with TILE_URL. */
   TILE_ATTRIBUTION: z.string().min(1).optional(),
+  /** Lets a coordinator set the product clock (PUT /api/drive/clock/now): for the browser tests, never in production. */
+  TEST_CLOCK: bool.default(false),
 });
 
 export type Env = z.infer<typeof EnvSchema>;
@@ -61,6 +63,7 @@ export interface Config {
   loginMaxFailures: number;
   serveClient: boolean;
   tiles: { url: string; attribution: string } | null;
+  testClock: boolean;
 }
 
 export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
@@ -72,6 +75,9 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
   const e = parsed.data;
   if (e.TILE_URL && !e.TILE_ATTRIBUTION) {
     throw new Error('Kindloop cannot start, a setting is wrong:\n  TILE_ATTRIBUTION: a tile server needs the credit its terms ask for');
+  }
+  if (e.TEST_CLOCK && e.NODE_ENV === 'production') {
+    throw new Error('Kindloop cannot start, a setting is wrong:\n  TEST_CLOCK: a settable clock is for tests, never in production');
   }
   return {
     env: e.NODE_ENV,
@@ -93,5 +99,6 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
     loginMaxFailures: e.LOGIN_MAX_FAILURES,
     serveClient: e.SERVE_CLIENT,
     tiles: e.TILE_URL && e.TILE_ATTRIBUTION ? { url: e.TILE_URL, attribution: e.TILE_ATTRIBUTION } : null,
+    testClock: e.TEST_CLOCK,
   };
 }

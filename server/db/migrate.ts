@@ -9,6 +9,8 @@ import * as m0060 from './migrations/0060-mail-attachments';
 import * as m0061 from './migrations/0061-drop-off-bookings';
 import * as m0070 from './migrations/0070-delivery-runs';
 import * as m0090 from './migrations/0090-thank-you-mail';
+import * as m0091 from './migrations/0091-glance-indexes';
+import * as m0100 from './migrations/0100-missed-drop-offs';
 
 /**
  * Migrations are listed here in order rather than globbed, so the same list works under tsx, in
@@ -25,6 +27,8 @@ const migrations = [
   { name: '0061-drop-off-bookings', ...m0061 },
   { name: '0070-delivery-runs', ...m0070 },
   { name: '0090-thank-you-mail', ...m0090 },
+  { name: '0091-glance-indexes', ...m0091 },
+  { name: '0100-missed-drop-offs', ...m0100 },
 ];
 
 const TABLE = 'schema_migrations';

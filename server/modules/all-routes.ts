@@ -44,7 +44,7 @@ export function allRoutes(ctx: RouteContext): RouteDef[] {
     ...planRoutes(),
     ...recipientRoutes({ sequelize: ctx.sequelize }),
     ...siteRoutes(),
-    ...bookingRoutes({ sequelize: ctx.sequelize, publicUrl: ctx.config.publicUrl, mailFrom: ctx.config.mailFrom }),
+    ...bookingRoutes({ sequelize: ctx.sequelize, publicUrl: ctx.config.publicUrl, mailFrom: ctx.config.mailFrom, testClock: ctx.config.testClock }),
     ...guidelineRoutes(),
     ...pledgeRoutes(ctx.sequelize),
     ...blanketRoutes(ctx.sequelize),

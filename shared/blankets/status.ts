@@ -64,7 +64,8 @@ export const STATUS_MOVES: readonly StatusMove[] = [
   { from: 'packed', to: 'delivered', direction: 'forward', by: DELIVERY, action: 'Mark as delivered', via: 'delivery' },
 
   { from: 'finished', to: 'in_progress', direction: 'back', by: MAKER, action: 'Back to in progress' },
-  { from: 'booked', to: 'finished', direction: 'back', by: MAKER, action: 'Cancel the drop-off', via: 'booking' },
+  // Staff make it too, when they mark that the maker did not come to the booked visit.
+  { from: 'booked', to: 'finished', direction: 'back', by: [...MAKER, ...STAFF], action: 'Cancel the drop-off', via: 'booking' },
   { from: 'received', to: 'booked', direction: 'back', by: STAFF, action: 'Not received after all' },
   { from: 'checked', to: 'received', direction: 'back', by: STAFF, action: 'Check it again' },
   { from: 'declined', to: 'received', direction: 'back', by: STAFF, action: 'Reconsider' },

@@ -2,7 +2,8 @@ import { z } from 'zod';
 import type { BlanketStatus } from './blanket';
 import { IsoDaySchema, type Closure, type OpeningHours } from './schedule';
 
-export const BOOKING_STATUSES = ['booked', 'cancelled'] as const;
+/** 'missed': the slot ended without the maker, and an organiser marked it so. */
+export const BOOKING_STATUSES = ['booked', 'cancelled', 'missed'] as const;
 export type BookingStatus = (typeof BOOKING_STATUSES)[number];
 
 /** A slot start as sent back by the server: ISO 8601 with an offset (or Z), to the minute. */
@@ -81,6 +82,11 @@ export interface BookingView {
   timeZone: string;
   maker: { id: number; name: string };
   blankets: Array<{ id: number; code: string; status: BlanketStatus }>;
-  /** For the day view: every blanket already received, or the slot is over and some never came. */
-  arrival: 'expected' | 'arrived' | 'not_arrived' | 'cancelled';
+  /**
+   * For the day view: every blanket already received; the slot is over and some never came
+   * (not_arrived, which an organiser may mark as missed); or marked "did not come" (missed).
+   */
+  arrival: 'expected' | 'arrived' | 'not_arrived' | 'missed' | 'cancelled';
+  /** Who marked it "did not come", and when (ISO 8601 with the drive's offset). */
+  missed?: { at: string; by: string | null } | null;
 }

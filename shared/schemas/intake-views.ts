@@ -73,11 +73,28 @@ export interface IntakeQueueItem {
   sizeCategory: string | null;
   /** When it arrived, or for inspected ones when it was inspected. */
   at: string | null;
+  /** For arrivals: whether it came with a drop-off booking or walked in without one. */
+  arrivedAs?: 'booked' | 'walk-in';
+}
+
+/** A visit booked at the site on the queue's day: when, who, with how many blankets, and whether they came. */
+export interface BookedArrival {
+  bookingId: number;
+  /** ISO 8601 with the drive's offset. */
+  start: string;
+  end: string;
+  makerName: string;
+  blankets: Array<{ id: number; code: string; status: BlanketStatus }>;
+  arrival: 'expected' | 'arrived' | 'not_arrived' | 'missed';
 }
 
 export interface IntakeQueue {
   site: { id: number; name: string };
   date: string;
+  /** The drive's zone, in which the day and every time here are read. */
+  timeZone: string;
+  /** Visits booked at this site on this day, in slot order (a site's day is a few dozen at most). */
+  bookedArrivals: BookedArrival[];
   /** Received at this site on this day. */
   arrived: IntakeQueueItem[];
   /** At this site, received and not yet inspected (by the end of this day): one page, oldest first. */

@@ -115,7 +115,8 @@ const listPage = (name: string) => z.coerce.number({ error: `${name} must be a n
 /** The day's lists come whole; the waiting and the expected lists come a page at a time. */
 export const IntakeQueueQuerySchema = z.object({
   siteId: z.coerce.number({ error: 'siteId must be a number' }).int().positive('siteId must be more than 0'),
-  date: IsoDaySchema,
+  /** The drive's today when left out. */
+  date: IsoDaySchema.optional(),
   waitingPage: listPage('waitingPage'),
   expectedPage: listPage('expectedPage'),
   pageSize: PageQuerySchema.shape.pageSize,

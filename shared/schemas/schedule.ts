@@ -84,3 +84,21 @@ export const TimeZoneSchema = z
   .refine((z) => IANAZone.isValidZone(z) && z.includes('/'), 'Not a time zone we know: use an IANA name like Europe/London');
 
 export const DriveClockUpdateSchema = z.object({ timeZone: TimeZoneSchema });
+
+/** GET /api/drive/clock: the drive's zone, its date today and the moment, with the zone's offset. */
+export interface DriveClockView {
+  timeZone: string;
+  today: string;
+  now: string;
+  /** True while a test has set the clock (TEST_CLOCK servers only). */
+  set: boolean;
+}
+
+/** PUT /api/drive/clock/now (TEST_CLOCK servers only): a moment with its offset, or null for the real time. */
+export const TestClockSchema = z.object({
+  now: z
+    .string({ error: 'now must be a time like 2027-03-27T10:30:00+01:00, or null' })
+    .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,3})?)?(Z|[+-]\d{2}:\d{2})$/, 'now must be a time with its offset, like 2027-03-27T10:30:00+01:00')
+    .refine((s) => !Number.isNaN(Date.parse(s)), 'now is not a real time')
+    .nullable(),
+});

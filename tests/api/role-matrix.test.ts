@@ -17,6 +17,7 @@ const COORDINATOR: Row = [401, 403, 403, 'ok'];
 const matrix: Record<string, Row> = {
   'GET /api/drive': PUBLIC,
   'GET /api/drive/progress': STAFF,
+  'GET /api/drive/glance': STAFF,
   'GET /api/health': PUBLIC,
   'GET /api/map': PUBLIC,
   'GET /api/auth/csrf': PUBLIC,
@@ -75,6 +76,8 @@ const matrix: Record<string, Row> = {
   'GET /api/intake/queue': STAFF,
   'GET /api/drive/clock': PUBLIC,
   'PUT /api/drive/clock': COORDINATOR,
+  'PUT /api/drive/clock/now': COORDINATOR,
+  'POST /api/bookings/:id/missed': STAFF,
   'GET /api/sites/:id/slots': SIGNED_IN,
   'GET /api/slots/soonest': SIGNED_IN,
   'GET /api/bookings': SIGNED_IN,

@@ -14,6 +14,9 @@ export class Booking extends Model<InferAttributes<Booking>, InferCreationAttrib
   declare reminderDueAt: CreationOptional<Date | null>;
   /** Set when the reminder was sent, or skipped because the maker turned reminders off. */
   declare reminderDoneAt: CreationOptional<Date | null>;
+  /** When an organiser marked that the maker did not come, and who did. */
+  declare missedAt: CreationOptional<Date | null>;
+  declare missedById: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare version: CreationOptional<number>;
@@ -37,6 +40,8 @@ export function initBooking(sequelize: Sequelize) {
       sequence: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       reminderDueAt: { type: DataTypes.DATE, allowNull: true },
       reminderDoneAt: { type: DataTypes.DATE, allowNull: true },
+      missedAt: { type: DataTypes.DATE, allowNull: true },
+      missedById: { type: DataTypes.INTEGER, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },

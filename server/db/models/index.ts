@@ -73,6 +73,7 @@ export function initModels(sequelize: Sequelize) {
 
   User.hasMany(Booking, { foreignKey: 'userId', as: 'bookings' });
   Booking.belongsTo(User, { foreignKey: 'userId', as: 'maker' });
+  Booking.belongsTo(User, { foreignKey: 'missedById', as: 'missedBy', constraints: false });
   Site.hasMany(Booking, { foreignKey: 'siteId', as: 'bookings' });
   Booking.belongsTo(Site, { foreignKey: 'siteId', as: 'site' });
   Booking.belongsToMany(Blanket, { through: BookingBlanket, foreignKey: 'bookingId', otherKey: 'blanketId', as: 'blankets' });

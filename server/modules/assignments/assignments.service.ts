@@ -1,3 +1,4 @@
+import { driveToday } from '../bookings/drive-clock';
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { Assignment } from '../../db/models/assignment';
 import { Blanket } from '../../db/models/blanket';
@@ -35,6 +36,9 @@ import type {
   Urgency,
   WaitingBlanket,
 } from '@shared/schemas/assignment';
+
+/** The drive's today as the matching engine counts days: its UTC midnight, so whole days come out exact. */
+const driveDay = async (): Promise<Date> => new Date(`${await driveToday()}T00:00:00Z`);
 
 /** A need due within this many days is shown as due soon. */
 const SOON_DAYS = 14;
@@ -340,8 +344,8 @@ async function openNeeds(filter: { recipientId?: number; sizeCategory?: SizeCate
   });
 }
 
-export async function boardNeeds(q: Pick<BoardQuery, 'recipientId' | 'sizeCategory'>, today = new Date()): Promise<BoardNeed[]> {
-  return (await openNeeds(q, today)).map(({ guidelines: _g, ...n }) => n);
+export async function boardNeeds(q: Pick<BoardQuery, 'recipientId' | 'sizeCategory'>, today?: Date): Promise<BoardNeed[]> {
+  return (await openNeeds(q, today ?? (await driveDay()))).map(({ guidelines: _g, ...n }) => n);
 }
 
 type WaitingRow = Blanket & { site?: Site | null; pledge?: (Pledge & { need?: LoadedNeed | null }) | null };
@@ -381,8 +385,8 @@ function matchBlanket(b: WaitingRow): MatchBlanket {
  * measured size and the guideline check, so they are applied here rather than in SQL; the page is
  * still cut on the server.
  */
-export async function boardWaiting(q: BoardQuery, today = new Date()): Promise<Page<WaitingBlanket>> {
-  const needs = await openNeeds({ recipientId: q.recipientId }, today);
+export async function boardWaiting(q: BoardQuery, today?: Date): Promise<Page<WaitingBlanket>> {
+  const needs = await openNeeds({ recipientId: q.recipientId }, today ?? (await driveDay()));
   const all = await waitingBlankets(q.siteId);
   const rows: Array<{ b: WaitingRow; fits: WaitingBlanket['fits']; category: SizeCategory | null }> = [];
   for (const b of all) {
@@ -432,10 +436,11 @@ export async function boardWaiting(q: BoardQuery, today = new Date()): Promise<P
 }
 
 /** The optimal suggestion for the whole drive, one site's stock or one recipient's needs. Writes nothing. */
-export async function suggest(body: SuggestBody, today = new Date()): Promise<Suggestion> {
+export async function suggest(body: SuggestBody, today?: Date): Promise<Suggestion> {
   if (body.siteId && !(await Site.findByPk(body.siteId))) throw fieldError(400, 'siteId', 'There is no such drop-off site');
   if (body.recipientId && !(await Recipient.findByPk(body.recipientId))) throw fieldError(400, 'recipientId', 'There is no such recipient');
-  const needs = await openNeeds({ recipientId: body.recipientId }, today);
+  const day = today ?? (await driveDay());
+  const needs = await openNeeds({ recipientId: body.recipientId }, day);
   const blankets = (await waitingBlankets(body.siteId)).map(matchBlanket);
   const matchNeeds: MatchNeed[] = needs.map((n) => ({
     id: n.needId,
@@ -447,5 +452,5 @@ export async function suggest(body: SuggestBody, today = new Date()): Promise<Su
     preferences: n.preferences,
     guidelines: n.guidelines,
   }));
-  return suggestAssignments(blankets, matchNeeds, today);
+  return suggestAssignments(blankets, matchNeeds, day);
 }

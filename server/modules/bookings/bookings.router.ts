@@ -2,7 +2,10 @@ import type { Sequelize } from 'sequelize';
 import type { z } from 'zod';
 import { validate } from '../../middleware/validate';
 import { IdParamSchema } from '@shared/schemas/user';
-import { DriveClockUpdateSchema } from '@shared/schemas/schedule';
+import { DriveClockUpdateSchema, TestClockSchema, type DriveClockView } from '@shared/schemas/schedule';
+import { isoIn } from '@shared/scheduling/slots';
+import { clockIsSet, setClock } from '../../lib/clock';
+import { HttpError } from '../../lib/http-error';
 import {
   BookingCreateSchema,
   BookingListQuerySchema,
@@ -15,12 +18,19 @@ import { User } from '../../db/models/user';
 import type { RouteDef } from '../route-table';
 import * as service from './bookings.service';
 import { siteSlots, soonestSlots } from './slots.service';
-import { driveZone, setDriveZone } from './drive-clock';
+import { driveNow, driveZone, setDriveZone } from './drive-clock';
 
 export interface BookingRouteContext {
   sequelize: Sequelize;
   publicUrl: string;
   mailFrom: string;
+  /** Whether PUT /api/drive/clock/now may set the product clock (TEST_CLOCK). */
+  testClock?: boolean;
+}
+
+async function clockView(): Promise<DriveClockView> {
+  const c = await driveNow();
+  return { timeZone: c.zone, today: c.today, now: isoIn(c.nowMs, c.zone), set: clockIsSet() };
 }
 
 export function bookingRoutes(ctx: BookingRouteContext): RouteDef[] {
@@ -30,8 +40,7 @@ export function bookingRoutes(ctx: BookingRouteContext): RouteDef[] {
       method: 'get', path: '/api/drive/clock', access: 'public', summary: "The drive's time zone and today's date in it",
       handlers: [
         async (_req, res) => {
-          const timeZone = await driveZone();
-          res.json({ timeZone, today: new Intl.DateTimeFormat('en-CA', { timeZone }).format(new Date()) });
+          res.json(await clockView());
         },
       ],
     },
@@ -41,7 +50,20 @@ export function bookingRoutes(ctx: BookingRouteContext): RouteDef[] {
         validate({ body: DriveClockUpdateSchema }),
         async (req, res) => {
           const { timeZone } = req.body as z.infer<typeof DriveClockUpdateSchema>;
-          res.json({ timeZone: await ctx.sequelize.transaction((t) => setDriveZone(timeZone, t)) });
+          await ctx.sequelize.transaction((t) => setDriveZone(timeZone, t));
+          res.json(await clockView());
+        },
+      ],
+    },
+    {
+      method: 'put', path: '/api/drive/clock/now', access: ['coordinator'], summary: 'Set the product clock for browser tests (TEST_CLOCK servers only; 404 elsewhere)',
+      handlers: [
+        validate({ body: TestClockSchema }),
+        async (req, res) => {
+          if (!ctx.testClock) throw new HttpError(404, "This server's clock follows the real time; it can be set only on a test server (TEST_CLOCK)");
+          const { now } = req.body as z.infer<typeof TestClockSchema>;
+          setClock(now === null ? null : Date.parse(now));
+          res.json(await clockView());
         },
       ],
     },
@@ -101,6 +123,15 @@ export function bookingRoutes(ctx: BookingRouteContext): RouteDef[] {
           const { bookingReminders } = req.body as z.infer<typeof ReminderPreferenceSchema>;
           await ctx.sequelize.transaction((transaction) => User.update({ bookingReminders }, { where: { id: req.user!.id }, transaction }));
           res.json({ bookingReminders });
+        },
+      ],
+    },
+    {
+      method: 'post', path: '/api/bookings/:id/missed', access: ['organiser', 'coordinator'], summary: 'Mark that the maker did not come (after the slot); the blankets are finished again',
+      handlers: [
+        validate({ params: IdParamSchema }),
+        async (req, res) => {
+          res.json({ booking: await service.markMissed(bctx, req.user!, Number(req.params.id)) });
         },
       ],
     },

@@ -16,6 +16,7 @@ import { driveZone } from './drive-clock';
 import { bookedCounts, nextFree, slotAt } from './slots.service';
 import { calendarAttachment, parseMailbox } from './invitation';
 import { bookingCancelledMail, bookingConfirmedMail, bookingMovedMail, whenText, type BookingMailFacts } from './booking-mail';
+import { nowMs } from '../../lib/clock';
 
 export interface BookingContext {
   sequelize: Sequelize;
@@ -34,7 +35,7 @@ export function reminderDueAt(startsAt: Date, zone: string, now: number): Date |
   return due.toMillis() > now ? due.toJSDate() : null;
 }
 
-type LoadedBooking = Booking & { site: Site; maker: User; blankets: Blanket[] };
+type LoadedBooking = Booking & { site: Site; maker: User; blankets: Blanket[]; missedBy?: User | null };
 
 async function loadBooking(id: number, transaction?: Transaction): Promise<LoadedBooking | null> {
   return (await Booking.findByPk(id, {
@@ -42,6 +43,7 @@ async function loadBooking(id: number, transaction?: Transaction): Promise<Loade
       { model: Site, as: 'site' },
       { model: User, as: 'maker', attributes: ['id', 'name', 'email', 'bookingReminders'] },
       { model: Blanket, as: 'blankets', attributes: ['id', 'code', 'status', 'userId'], through: { attributes: [] } },
+      { model: User, as: 'missedBy', attributes: ['id', 'name'] },
     ],
     transaction,
   })) as LoadedBooking | null;
@@ -62,7 +64,9 @@ export function bookingView(b: LoadedBooking, zone: string, now: number): Bookin
     timeZone: zone,
     maker: { id: b.maker.id, name: b.maker.name },
     blankets,
-    arrival: !live ? 'cancelled' : !stillBooked ? 'arrived' : b.endsAt.getTime() < now ? 'not_arrived' : 'expected',
+    arrival:
+      b.status === 'missed' ? 'missed' : !live ? 'cancelled' : !stillBooked ? 'arrived' : b.endsAt.getTime() <= now ? 'not_arrived' : 'expected',
+    missed: b.missedAt ? { at: isoIn(b.missedAt.getTime(), zone), by: b.missedBy?.name ?? null } : null,
   };
 }
 
@@ -160,7 +164,7 @@ function invitationMail(
 }
 
 export async function createBooking(ctx: BookingContext, actor: Actor, body: BookingCreate): Promise<BookingView> {
-  const now = ctx.now?.() ?? Date.now();
+  const now = ctx.now?.() ?? nowMs();
   const id = await ctx.sequelize.transaction(async (transaction) => {
     const zone = await driveZone(transaction);
     const { site, slot } = await chooseSlot(body.siteId, body.start, zone, now, transaction);
@@ -193,19 +197,19 @@ async function ownBooking(actor: Actor, id: number, transaction?: Transaction): 
   return b;
 }
 
-export async function getBooking(actor: Actor, id: number, now = Date.now()): Promise<BookingView> {
+export async function getBooking(actor: Actor, id: number, now = nowMs()): Promise<BookingView> {
   const b = await loadBooking(id);
   if (!b || (b.userId !== actor.id && actor.role === 'volunteer')) throw notFound('That drop-off booking');
   return bookingView(b, await driveZone(), now);
 }
 
 function mustBeLive(b: Booking, now: number) {
-  if (b.status !== 'booked') throw new HttpError(409, 'This drop-off was cancelled; book a new one');
+  if (b.status !== 'booked') throw new HttpError(409, b.status === 'missed' ? 'This drop-off was marked as not come; book a new one' : 'This drop-off was cancelled; book a new one');
   if (b.startsAt.getTime() <= now) throw new HttpError(409, 'This drop-off has already begun; it can no longer be changed');
 }
 
 export async function moveBooking(ctx: BookingContext, actor: Actor, id: number, body: BookingUpdate): Promise<BookingView> {
-  const now = ctx.now?.() ?? Date.now();
+  const now = ctx.now?.() ?? nowMs();
   await ctx.sequelize.transaction(async (transaction) => {
     const zone = await driveZone(transaction);
     const b = await ownBooking(actor, id, transaction);
@@ -248,11 +252,11 @@ export async function moveBooking(ctx: BookingContext, actor: Actor, id: number,
 }
 
 export async function cancelBooking(ctx: BookingContext, actor: Actor, id: number): Promise<BookingView> {
-  const now = ctx.now?.() ?? Date.now();
+  const now = ctx.now?.() ?? nowMs();
   await ctx.sequelize.transaction(async (transaction) => {
     const zone = await driveZone(transaction);
     const b = await ownBooking(actor, id, transaction);
-    if (b.status !== 'booked') throw new HttpError(409, 'This drop-off is already cancelled');
+    if (b.status !== 'booked') throw new HttpError(409, b.status === 'missed' ? 'This drop-off was marked as not come; its blankets are finished again' : 'This drop-off is already cancelled');
     const carried = b.blankets.filter((x) => x.status === 'booked');
     for (const x of carried) {
       const blanket = (await Blanket.findByPk(x.id, { transaction }))!;
@@ -267,24 +271,36 @@ export async function cancelBooking(ctx: BookingContext, actor: Actor, id: numbe
   return getBooking(actor, id, now);
 }
 
+const LIST_INCLUDE = [
+  { model: Site, as: 'site' },
+  { model: User, as: 'maker', attributes: ['id', 'name', 'email'] },
+  { model: Blanket, as: 'blankets', attributes: ['id', 'code', 'status', 'userId'], through: { attributes: [] } },
+  { model: User, as: 'missedBy', attributes: ['id', 'name'] },
+];
+
+/**
+ * Every booking at a site on a day of the drive's calendar, in slot order: the organisers' day view
+ * and the intake queue's booked arrivals read the same list. A site's day holds a few dozen visits at
+ * most (its slots times their places), so it comes whole.
+ */
+export async function siteDay(siteId: number, day: string, zone: string, now: number): Promise<BookingView[]> {
+  const from = DateTime.fromISO(day, { zone }).startOf('day');
+  const to = DateTime.fromISO(addDays(day, 1), { zone }).startOf('day');
+  const rows = (await Booking.findAll({
+    where: { siteId, startsAt: { [Op.gte]: from.toJSDate(), [Op.lt]: to.toJSDate() } },
+    include: LIST_INCLUDE,
+    order: [['startsAt', 'ASC'], ['id', 'ASC']],
+  })) as LoadedBooking[];
+  return rows.map((b) => bookingView(b, zone, now));
+}
+
 /** A maker's own bookings (newest first), or for organisers a site's day in slot order. */
-export async function listBookings(actor: Actor, q: BookingListQuery, now = Date.now()): Promise<BookingView[]> {
+export async function listBookings(actor: Actor, q: BookingListQuery, now = nowMs()): Promise<BookingView[]> {
   const zone = await driveZone();
-  const include = [
-    { model: Site, as: 'site' },
-    { model: User, as: 'maker', attributes: ['id', 'name', 'email'] },
-    { model: Blanket, as: 'blankets', attributes: ['id', 'code', 'status', 'userId'], through: { attributes: [] } },
-  ];
+  const include = LIST_INCLUDE;
   if (q.siteId !== undefined && q.day !== undefined) {
     if (actor.role === 'volunteer') throw new HttpError(403, "Only organisers and coordinators see a site's day");
-    const from = DateTime.fromISO(q.day, { zone }).startOf('day');
-    const to = DateTime.fromISO(addDays(q.day, 1), { zone }).startOf('day');
-    const rows = (await Booking.findAll({
-      where: { siteId: q.siteId, startsAt: { [Op.gte]: from.toJSDate(), [Op.lt]: to.toJSDate() } },
-      include,
-      order: [['startsAt', 'ASC'], ['id', 'ASC']],
-    })) as LoadedBooking[];
-    return rows.map((b) => bookingView(b, zone, now));
+    return siteDay(q.siteId, q.day, zone, now);
   }
   const rows = (await Booking.findAll({
     where: { userId: actor.id },
@@ -293,4 +309,37 @@ export async function listBookings(actor: Actor, q: BookingListQuery, now = Date
     limit: 50,
   })) as LoadedBooking[];
   return rows.map((b) => bookingView(b, zone, now));
+}
+
+/**
+ * An organiser marks a visit "did not come" once its slot has ended by the drive's clock. The blankets
+ * it still carried go back from booked to finished through moveBlanket, in the same transaction as the
+ * mark, so the maker can book them again; any that did arrive stay where intake put them. Two people
+ * marking at once: the write lock (docs/decisions/0005) lets the first through and the rest find it
+ * marked already, a 409.
+ */
+export async function markMissed(ctx: BookingContext, actor: Actor, id: number): Promise<BookingView> {
+  const now = ctx.now?.() ?? nowMs();
+  await ctx.sequelize.transaction(async (transaction) => {
+    const zone = await driveZone(transaction);
+    const b = await loadBooking(id, transaction);
+    if (!b) throw notFound('That drop-off booking');
+    if (b.status === 'missed') throw new HttpError(409, `${b.maker.name}'s visit is already marked as not come${b.missedBy ? ` (by ${b.missedBy.name})` : ''}`);
+    if (b.status !== 'booked') throw new HttpError(409, 'This drop-off was cancelled; there is nothing to mark');
+    if (b.endsAt.getTime() > now) {
+      throw new HttpError(409, `The slot runs until ${DateTime.fromJSDate(b.endsAt, { zone }).toFormat('HH:mm')} (${zone}); mark it after that`);
+    }
+    const carried = b.blankets.filter((x) => x.status === 'booked');
+    if (carried.length === 0) throw new HttpError(409, `Every blanket of this visit was received; ${b.maker.name} came`);
+    for (const x of carried) {
+      const blanket = (await Blanket.findByPk(x.id, { transaction }))!;
+      await moveBlanket(
+        { blanket, to: 'finished', actor, via: 'booking', kind: 'booking', reason: 'Did not come to the drop-off', data: { bookingId: b.id, siteId: b.siteId }, changes: { siteId: null } },
+        transaction,
+      );
+    }
+    b.set({ status: 'missed', missedAt: new Date(now), missedById: actor.id, reminderDoneAt: b.reminderDoneAt ?? new Date(now) });
+    await b.save({ transaction });
+  });
+  return getBooking(actor, id, now);
 }

@@ -1,5 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { Drive } from '../../db/models/drive';
+import { nowMs } from '../../lib/clock';
+import { todayIn } from '@shared/scheduling/slots';
 
 /** The fallback when no drive row exists yet (a fresh database before seeding). */
 export const DEFAULT_TIME_ZONE = 'Europe/London';
@@ -16,4 +18,27 @@ export async function setDriveZone(timeZone: string, transaction: Transaction): 
   drive.timeZone = timeZone;
   await drive.save({ transaction });
   return drive.timeZone;
+}
+
+export interface DriveNow {
+  zone: string;
+  /** The product clock's instant (lib/clock). */
+  nowMs: number;
+  /** The drive's date at that instant, YYYY-MM-DD in its zone. */
+  today: string;
+}
+
+/**
+ * The one answer to "what day is it": the drive's local date, read in its zone from the product clock.
+ * A pledge's lateness, the intake queue's day, open needs and runs all start from here, never from
+ * the server's zone or UTC.
+ */
+export async function driveNow(transaction?: Transaction): Promise<DriveNow> {
+  const zone = await driveZone(transaction);
+  const at = nowMs();
+  return { zone, nowMs: at, today: todayIn(zone, at) };
+}
+
+export async function driveToday(transaction?: Transaction): Promise<string> {
+  return (await driveNow(transaction)).today;
 }

@@ -6,6 +6,7 @@ import { User } from '../../db/models/user';
 import { enqueueMail } from '../../mail/outbox';
 import { bookingReminderMail } from './booking-mail';
 import { driveZone } from './drive-clock';
+import { now as clockNow } from '../../lib/clock';
 
 export interface ReminderContext {
   sequelize: Sequelize;
@@ -18,7 +19,7 @@ export interface ReminderContext {
  * whether or not the server restarted in between; a maker who turned reminders off is marked done
  * without a message. A booking that has begun, or was cancelled, gets none.
  */
-export async function sendDueReminders(ctx: ReminderContext, now: Date = new Date()) {
+export async function sendDueReminders(ctx: ReminderContext, now: Date = clockNow()) {
   const due = await Booking.findAll({
     attributes: ['id'],
     where: { status: 'booked', reminderDoneAt: null, reminderDueAt: { [Op.lte]: now }, startsAt: { [Op.gt]: now } },
@@ -69,7 +70,7 @@ export async function sendDueReminders(ctx: ReminderContext, now: Date = new Dat
  * The reminder clock inside the server. State lives in the database (reminderDueAt / reminderDoneAt),
  * so a restart picks up whatever fell due while it was down. `clock` lets a test set the time.
  */
-export function startReminderScheduler(ctx: ReminderContext, intervalMs = 60_000, clock: () => Date = () => new Date()) {
+export function startReminderScheduler(ctx: ReminderContext, intervalMs = 60_000, clock: () => Date = clockNow) {
   let running = false;
   const tick = async () => {
     if (running) return;

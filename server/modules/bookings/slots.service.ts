@@ -6,6 +6,7 @@ import { EMPTY_HOURS, type SiteSchedule } from '@shared/schemas/schedule';
 import type { SiteSlotsView, SlotView, SoonestSlotView } from '@shared/schemas/booking';
 import { MAX_SLOT_RANGE_DAYS, addDays, daysBetween, slotsBetween, todayIn, type SlotTime } from '@shared/scheduling/slots';
 import { driveZone } from './drive-clock';
+import { nowMs } from '../../lib/clock';
 
 /** How far ahead the soonest-slot search and the "next free" hints look. */
 export const LOOKAHEAD_DAYS = 28;
@@ -44,7 +45,7 @@ export async function slotsWithRoom(site: Site, zone: string, from: string, to: 
   return times.map((s) => ({ start: s.start, end: s.end, capacity: site.slotCapacity, remaining: Math.max(0, site.slotCapacity - (counts.get(s.startMs) ?? 0)) }));
 }
 
-export async function siteSlots(siteId: number, from: string, to: string, now = Date.now()): Promise<SiteSlotsView> {
+export async function siteSlots(siteId: number, from: string, to: string, now = nowMs()): Promise<SiteSlotsView> {
   if (daysBetween(from, to) > MAX_SLOT_RANGE_DAYS) {
     throw new HttpError(400, `Ask for at most ${MAX_SLOT_RANGE_DAYS} days of slots at a time`, [{ path: 'to', message: `At most ${MAX_SLOT_RANGE_DAYS} days after from` }]);
   }
@@ -69,7 +70,7 @@ export async function nextFree(site: Site, zone: string, now: number, limit: num
 }
 
 /** The soonest slots with room across every open site, and each site's next free slot. */
-export async function soonestSlots(limit: number, now = Date.now()) {
+export async function soonestSlots(limit: number, now = nowMs()) {
   const zone = await driveZone();
   const sites = await Site.findAll({ where: { active: true }, order: [['name', 'ASC']] });
   const soonest: SoonestSlotView[] = [];

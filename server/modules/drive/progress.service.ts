@@ -5,7 +5,7 @@ import { Recipient } from '../../db/models/recipient';
 import type { BlanketStatus } from '@shared/schemas/blanket';
 import type { DriveProgress } from '@shared/schemas/pledge';
 import { needCounts } from '../pledges/need-counts';
-import { todayIso } from '../pledges/recipient-brief';
+import { driveToday } from '../bookings/drive-clock';
 
 /**
  * The staff home page's charts: per recipient, its open needs' figures summed (the same needs and
@@ -14,7 +14,7 @@ import { todayIso } from '../pledges/recipient-brief';
 export async function driveProgress(): Promise<DriveProgress> {
   const needs = await Need.findAll({
     attributes: ['id', 'recipientId'],
-    where: { deadline: { [Op.gte]: todayIso() } },
+    where: { deadline: { [Op.gte]: await driveToday() } },
     include: [{ model: Recipient, as: 'recipient', attributes: ['id', 'name'], where: { active: true } }],
     order: [['id', 'ASC']],
   });

@@ -1,3 +1,4 @@
+import { DateTime } from 'luxon';
 import { Op, literal, where as sqlWhere, type Sequelize, type Transaction } from 'sequelize';
 import QRCode from 'qrcode';
 import { Blanket } from '../../db/models/blanket';
@@ -12,10 +13,12 @@ import { sizeCategoryFor } from '@shared/guidelines/size-categories';
 import { fieldsForCheck, sizeOnRecord, type BlanketFields, type BlanketStatus } from '@shared/schemas/blanket';
 import type { IntakeBody, IntakeQueueQuery, InspectionBody } from '@shared/schemas/intake';
 import { CHECKLIST_ITEMS, RECEIVABLE_STATUSES, suggestOutcome, OUTCOME_LABELS } from '@shared/intake/rules';
-import type { BlanketTag, IntakeBlanketView, IntakeQueue, IntakeQueueItem } from '@shared/schemas/intake-views';
+import type { BlanketTag, BookedArrival, IntakeBlanketView, IntakeQueue, IntakeQueueItem } from '@shared/schemas/intake-views';
 import { maySee, readsAll, type Actor } from '../../auth/actor';
 import { checkAgainst, type CheckAnswer } from '../guidelines/guidelines.service';
 import { eventView } from '../blankets/blankets.service';
+import { driveNow } from '../bookings/drive-clock';
+import { siteDay } from '../bookings/bookings.service';
 
 const INCLUDE = [
   { model: User, as: 'maker' },
@@ -303,13 +306,13 @@ export async function inspect(
   return findById(id);
 }
 
-function dayBounds(isoDay: string): [Date, Date] {
-  // The drive runs in one town, so the server's own time zone decides where a day begins.
-  const [y, m, d] = isoDay.split('-').map(Number) as [number, number, number];
-  return [new Date(y, m - 1, d), new Date(y, m - 1, d + 1)];
+/** Where a day begins and ends in the drive's zone (not the server's): a day of 23 or 25 hours at a clock change. */
+function dayBounds(isoDay: string, zone: string): [Date, Date] {
+  const start = DateTime.fromISO(isoDay, { zone }).startOf('day');
+  return [start.toJSDate(), start.plus({ days: 1 }).startOf('day').toJSDate()];
 }
 
-function queueItem(b: LoadedBlanket, at: Date | null): IntakeQueueItem {
+function queueItem(b: LoadedBlanket, at: Date | null, arrivedAs?: IntakeQueueItem['arrivedAs']): IntakeQueueItem {
   return {
     id: b.id,
     code: b.code,
@@ -320,6 +323,7 @@ function queueItem(b: LoadedBlanket, at: Date | null): IntakeQueueItem {
     lengthCm: sizeOnRecord(b).lengthCm,
     sizeCategory: sizeCategoryFor(sizeOnRecord(b).widthCm, sizeOnRecord(b).lengthCm),
     at: at ? at.toISOString() : null,
+    ...(arrivedAs ? { arrivedAs } : {}),
   };
 }
 
@@ -335,16 +339,19 @@ const QUEUE_INCLUDE = [
  * drive, so they come a page at a time with their totals).
  */
 export async function queue(q: IntakeQueueQuery): Promise<IntakeQueue> {
-  const { siteId, date: isoDay, pageSize } = q;
+  const { siteId, pageSize } = q;
   const site = await Site.findByPk(siteId, { attributes: ['id', 'name'] });
   if (!site) throw notFound('That drop-off site');
-  const [start, end] = dayBounds(isoDay);
+  const clock = await driveNow();
+  // Without a day the queue is today's, the drive's today.
+  const isoDay = q.date ?? clock.today;
+  const [start, end] = dayBounds(isoDay, clock.zone);
   const inDay = { [Op.gte]: start, [Op.lt]: end };
 
   // SQLite reads the site out of the intake record itself, so the day's records are never parsed here;
   // inspections carry large records (the check) and only their time and blanket are needed.
   const intakeEvents = await BlanketEvent.findAll({
-    attributes: ['id', 'blanketId', 'createdAt'],
+    attributes: ['id', 'blanketId', 'createdAt', 'fromStatus'],
     where: { kind: 'intake', createdAt: inDay, [Op.and]: [sqlWhere(literal("json_extract(`BlanketEvent`.`data`, '$.siteId')"), siteId)] },
     order: [['createdAt', 'ASC'], ['id', 'ASC']],
   });
@@ -362,7 +369,8 @@ export async function queue(q: IntakeQueueQuery): Promise<IntakeQueue> {
   const arrived: IntakeQueueItem[] = [];
   for (const e of intakeEvents) {
     const b = byId.get(e.blanketId);
-    if (b) arrived.push(queueItem(b, e.createdAt));
+    // A blanket received from "booked" came with its booking; from "finished", it walked in.
+    if (b) arrived.push(queueItem(b, e.createdAt, e.fromStatus === 'booked' ? 'booked' : 'walk-in'));
   }
   const inspected: IntakeQueueItem[] = [];
   const seen = new Set<number>();
@@ -391,9 +399,17 @@ export async function queue(q: IntakeQueueQuery): Promise<IntakeQueue> {
     limit: pageSize,
     offset: (q.expectedPage - 1) * pageSize,
   })) as LoadedBlanket[];
+  // Cancelled visits are not coming; everything else booked for the day stands beside the walk-ins.
+  const bookedArrivals: BookedArrival[] = (await siteDay(siteId, isoDay, clock.zone, clock.nowMs)).flatMap((v) =>
+    v.arrival === 'cancelled'
+      ? []
+      : [{ bookingId: v.id, start: v.start, end: v.end, makerName: v.maker.name, blankets: v.blankets, arrival: v.arrival }],
+  );
   return {
     site: { id: site.id, name: site.name },
     date: isoDay,
+    timeZone: clock.zone,
+    bookedArrivals,
     arrived,
     waiting: waiting.map((b) => queueItem(b, b.receivedAt ?? null)),
     waitingTotal,

@@ -3,7 +3,8 @@ import { Need } from '../../db/models/need';
 import { Pledge } from '../../db/models/pledge';
 import { Recipient } from '../../db/models/recipient';
 import type { OpenNeed } from '@shared/schemas/pledge';
-import { recipientBrief, todayIso } from './recipient-brief';
+import { recipientBrief } from './recipient-brief';
+import { driveToday } from '../bookings/drive-clock';
 import { needCounts } from './need-counts';
 import type { Actor } from '../../auth/actor';
 
@@ -12,7 +13,7 @@ import type { Actor } from '../../auth/actor';
  * Pledged comes from needCounts, shared with the recipient pages and the charts.
  */
 export async function listOpenNeeds(actor: Actor): Promise<OpenNeed[]> {
-  const today = todayIso();
+  const today = await driveToday();
   const needs = await Need.findAll({
     where: { deadline: { [Op.gte]: today } },
     include: [{ model: Recipient, as: 'recipient', where: { active: true } }],

@@ -15,7 +15,8 @@ import {
   type PledgeView,
 } from '@shared/schemas/pledge';
 import type { SizeCategory } from '@shared/schemas/blanket';
-import { recipientBrief, todayIso, addDaysIso } from './recipient-brief';
+import { recipientBrief, addDaysIso } from './recipient-brief';
+import { driveToday } from '../bookings/drive-clock';
 import { addToTally, emptyTally, isPledgeLate, pledgeStatusFor, type PledgeTally } from '@shared/pledges/rules';
 import type { Page } from '@shared/schemas/page';
 
@@ -76,7 +77,7 @@ function view(p: Pledge, counts: PledgeTally | undefined, today: string): Pledge
 
 async function views(pledges: Pledge[], transaction?: Transaction): Promise<PledgeView[]> {
   const counts = await blanketCounts(pledges.map((p) => p.id), transaction);
-  const today = todayIso();
+  const today = await driveToday(transaction);
   return pledges.map((p) => view(p, counts.get(p.id), today));
 }
 
@@ -159,7 +160,7 @@ async function openNeed(needId: number, sizeCategory: SizeCategory, today: strin
 }
 
 export async function createPledge(actor: Actor, body: PledgeCreate, transaction: Transaction): Promise<PledgeView> {
-  const today = todayIso();
+  const today = await driveToday(transaction);
   checkDueDate(body.dueDate, today);
   if (body.needId !== null) {
     const need = await openNeed(body.needId, body.sizeCategory, today, transaction);
@@ -186,7 +187,7 @@ export async function updatePledge(actor: Actor, id: number, body: PledgeUpdate,
   const p = await ownPledge(actor, id, transaction);
   checkVersion(body.version, p.version);
   if (p.status === 'cancelled') throw new HttpError(409, 'This pledge was cancelled; make a new one instead');
-  const today = todayIso();
+  const today = await driveToday(transaction);
   const counts = await pledgeTally(p.id, transaction);
 
   const currentNeedId = p.needId ?? null;

@@ -42,8 +42,6 @@ export async function activeRecipients(transaction?: Transaction): Promise<Recip
   return Recipient.findAll({ where: { active: true }, order: [['name', 'ASC']], transaction });
 }
 
-export const todayIso = (now = new Date()): string => now.toISOString().slice(0, 10);
-
 export function addDaysIso(day: string, days: number): string {
   return new Date(Date.parse(`${day}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 }

@@ -14,6 +14,7 @@ import { ASSIGNED_STATUSES } from '@shared/blankets/status';
 import type { Page } from '@shared/schemas/page';
 import type { ExportView } from '@shared/schemas/run';
 import { manifestRecord, manifestStringifier, type ManifestRecord, type ManifestSourceRow } from './manifest-format';
+import { driveToday } from '../bookings/drive-clock';
 
 export type ManifestTarget = { kind: 'run'; id: number } | { kind: 'recipient'; id: number };
 
@@ -135,7 +136,7 @@ export async function streamManifest(
   res: Response,
 ): Promise<void> {
   const { title, slug, rows: expected } = await describeTarget(sequelize, target);
-  const stamp = new Date().toISOString().slice(0, 10);
+  const stamp = await driveToday();
   const fileName = `kindloop-${slug}-made-${stamp}-${crypto.randomBytes(3).toString('hex')}.csv`;
   fs.mkdirSync(exportDir, { recursive: true });
   const filePath = path.join(exportDir, fileName);

@@ -1,3 +1,4 @@
+import { driveToday } from '../bookings/drive-clock';
 import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { Blanket } from '../../db/models/blanket';
 import { Recipient } from '../../db/models/recipient';
@@ -156,7 +157,7 @@ export async function getRun(id: number): Promise<RunView> {
 }
 
 export async function listRuns(q: RunListQuery): Promise<Page<RunSummary>> {
-  const today = new Date().toISOString().slice(0, 10);
+  const today = await driveToday();
   const where = q.when === 'upcoming' ? { runDate: { [Op.gte]: today } } : q.when === 'past' ? { runDate: { [Op.lt]: today } } : {};
   const dir = q.dir ?? (q.when === 'upcoming' ? 'asc' : 'desc');
   const { rows, count } = await Run.findAndCountAll({

@@ -28,3 +28,10 @@ export function useCancelBooking() {
   const refresh = useRefreshAll();
   return useMutation({ mutationFn: cancelBooking, onSettled: refresh });
 }
+
+/** An organiser marks that the maker did not come; the blankets are finished again, so all is refetched. */
+export const markMissed = (id: number) => api.post<{ booking: BookingView }>(`/api/bookings/${id}/missed`, {}).then((r) => r.booking);
+export function useMarkMissed() {
+  const refresh = useRefreshAll();
+  return useMutation({ mutationFn: markMissed, onSettled: refresh });
+}
