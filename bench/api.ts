@@ -4,7 +4,8 @@
  *   npm run bench:api -- [--db bench/data/demo-20k.sqlite] [--duration 10] [--connections 50] [--no-write]
  *
  * Grows the demo to 20,000 blankets first when the database is missing (bench/grow-demo.ts), starts
- * Kindloop on a copy of it (port 3411) and the bare baseline (port 3413), signs in as the demo
+ * Kindloop as `npm start` does (the bundled server, rebundled first if its sources changed) on a
+ * copy of it (port 3411) and the bare baseline (port 3413), signs in as the demo
  * volunteer and organiser, and runs autocannon against each route and then its baseline. Prints
  * req/s, p50, p99 and bytes with the ratio to the baseline, the server's start time and its largest
  * RSS during the run, and writes them into bench/README.md between the api-bench markers.
@@ -17,6 +18,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
 import { BENCH_PASSWORD, growDemo } from './grow-demo';
+import { SERVER_ENTRY, buildServerIfChanged } from '../scripts/build-if-changed';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const arg = (name: string, fallback: string) => {
@@ -116,8 +118,9 @@ async function main() {
     process.exit(130);
   });
   try {
+    buildServerIfChanged();
     const started = Date.now();
-    server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+    server = spawn(process.execPath, [SERVER_ENTRY], {
       cwd: root,
       stdio: ['ignore', 'ignore', 'inherit'],
       env: {

@@ -12,6 +12,7 @@ import { csrfProtection } from './auth/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { mountRoutes, type RouteDef } from './modules/route-table';
 import { allRoutes } from './modules/all-routes';
+import { preparedRead } from './db/prepared-read';
 
 /** How stale the session's stamp (and its stored expiry) may grow before a request renews it. */
 export const TOUCH_EVERY_MS = 60_000;
@@ -63,7 +64,22 @@ export function createApp(deps: AppDeps): KindloopApp {
       userId: s.passport?.user ?? null,
     }),
   };
-  const store = new SequelizeStore(storeOptions);
+  // Reading the session is the one store call every request makes; it goes through a prepared
+  // statement instead of a model query (the store's writes stay as they are).
+  class SessionStore extends SequelizeStore {
+    override get(sid: string, fn: (err: unknown, session?: session.SessionData | null) => void) {
+      preparedRead<{ data: string | null }>(sequelize, 'SELECT data FROM sessions WHERE sid = ?', [sid]).then(([row]) => {
+        let data: session.SessionData | null;
+        try {
+          data = row?.data ? (JSON.parse(row.data) as session.SessionData) : null;
+        } catch (err) {
+          return fn(err);
+        }
+        fn(null, data);
+      }, fn);
+    }
+  }
+  const store = new SessionStore(storeOptions);
   const passport = configurePassport(config.scryptLogN);
 
   app.use(

@@ -1,6 +1,8 @@
 import passport, { type PassportStatic } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
+import type { Role } from '@shared/schemas/user';
 import { User } from '../db/models/user';
+import { preparedRead } from '../db/prepared-read';
 import { dummyVerify, hashCost, hashPassword, verifyPassword } from './password';
 
 export function configurePassport(scryptLogN: number): PassportStatic {
@@ -26,10 +28,15 @@ export function configurePassport(scryptLogN: number): PassportStatic {
     }),
   );
   p.serializeUser((user, done) => done(null, user.id));
+  // Every signed-in request comes through here: one prepared statement reads what toPublic() gives.
   p.deserializeUser(async (id: number, done) => {
     try {
-      const user = await User.findByPk(id);
-      done(null, user && user.active ? user.toPublic() : false);
+      const [row] = await preparedRead<{ id: number; name: string; email: string; role: Role; active: number }>(
+        User.sequelize!,
+        'SELECT id, name, email, role, active FROM users WHERE id = ?',
+        [id],
+      );
+      done(null, row && row.active ? { ...row, active: true } : false);
     } catch (err) {
       done(err);
     }

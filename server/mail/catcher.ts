@@ -1,6 +1,6 @@
 import { randomBytes, timingSafeEqual } from 'node:crypto';
 import { SMTPServer } from 'smtp-server';
-import { simpleParser, type AddressObject } from 'mailparser';
+import type { AddressObject } from 'mailparser';
 import { CaughtMail } from '../db/models/caught-mail';
 import { addressesIn } from './redact';
 
@@ -46,7 +46,9 @@ export function startMailCatcher(port: number, opts: { sender: string; credentia
       return callback(refuse(`Only ${sender} may send through this mail catcher`, 553));
     },
     onData(stream, _session, callback) {
-      simpleParser(stream)
+      // mailparser is loaded with the first message caught, not at every start.
+      import('mailparser')
+        .then(({ simpleParser }) => simpleParser(stream))
         .then((parsed) => {
           const from = addresses(parsed.from);
           if (addressesIn(from)[0] !== sender) throw refuse(`Only ${sender} may send through this mail catcher`, 553);

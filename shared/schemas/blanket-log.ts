@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { GLANCE_STEPS } from '../drive/glance';
+import { IsoDaySchema } from './schedule';
 import {
   BlanketFieldsSchema,
   BlanketStatusSchema,
@@ -120,13 +122,32 @@ export const BLANKET_SORTS = ['createdAt', 'code', 'status', 'recipient', 'size'
 export type BlanketSort = (typeof BLANKET_SORTS)[number];
 
 /** GET /api/blankets: one page, newest first unless `sort`/`dir` say otherwise; `q` searches code, colours, recipient and maker. */
+const stepEnum = z.enum(GLANCE_STEPS, { error: `A step is one of ${GLANCE_STEPS.join(', ')}` });
+
+/**
+ * GET /api/blankets: one page, newest first unless `sort`/`dir` say otherwise; `q` searches code,
+ * colours, recipient and maker. The drive at a glance links here with the filters behind each of its
+ * figures: `step` (now at that step), `needId` (counted for that need: its live assignment's need, or
+ * else its pledge's), and `reached` with `from`/`to` (reached that step on a day from `from` up to,
+ * not including, `to`, in UTC).
+ */
 export const BlanketListQuerySchema = PageQuerySchema.extend({
   mine: flag.optional(),
   status: BlanketStatusSchema.optional(),
   pledgeId: z.coerce.number().int().positive().optional(),
+  step: stepEnum.optional(),
+  needId: z.coerce.number({ error: 'needId must be a number' }).int('needId must be a whole number').positive('needId must be positive').optional(),
+  reached: stepEnum.optional(),
+  from: IsoDaySchema.optional(),
+  to: IsoDaySchema.optional(),
   sort: z.enum(BLANKET_SORTS, { error: `sort is one of ${BLANKET_SORTS.join(', ')}` }).default('createdAt'),
   q: SearchSchema,
-});
+})
+  .refine((v) => (v.reached === undefined) === (v.from === undefined && v.to === undefined) && (v.from === undefined) === (v.to === undefined), {
+    message: 'reached, from and to go together',
+    path: ['reached'],
+  })
+  .refine((v) => v.from === undefined || v.to === undefined || v.from < v.to, { message: 'to must be after from', path: ['to'] });
 export type BlanketListQuery = z.infer<typeof BlanketListQuerySchema>;
 
 export const PhotoParamsSchema = z.object({

@@ -33,6 +33,7 @@ export const routes = [
   { path: 'forgot-password', ...page(() => import('./routes/auth/forgot-password')) },
   { path: 'reset-password', ...page(() => import('./routes/auth/reset-password')) },
   { path: 'home', ...guarded(() => import('./routes/home/dashboard')) },
+  { path: 'drive', ...guarded(() => import('./routes/home/drive-glance'), ['organiser', 'coordinator']) },
   { path: 'people', ...guarded(() => import('./routes/coordinator/people'), ['coordinator']) },
   { path: 'mail', ...guarded(() => import('./routes/coordinator/mail'), ['coordinator']) },
   { path: 'recipients', ...guarded(() => import('./routes/coordinator/recipients'), ['organiser', 'coordinator']) },

@@ -17,6 +17,7 @@ const COORDINATOR: Row = [401, 403, 403, 'ok'];
 const matrix: Record<string, Row> = {
   'GET /api/drive': PUBLIC,
   'GET /api/drive/progress': STAFF,
+  'GET /api/drive/glance': STAFF,
   'GET /api/health': PUBLIC,
   'GET /api/map': PUBLIC,
   'GET /api/auth/csrf': PUBLIC,

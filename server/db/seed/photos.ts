@@ -1,8 +1,7 @@
-import sharp from 'sharp';
 import { Op } from 'sequelize';
 import { Blanket } from '../models/blanket';
 import { Photo } from '../models/photo';
-import { preparePhoto, writePhoto } from '../../modules/photos/photo-files';
+import { loadSharp, preparePhoto, writePhoto } from '../../modules/photos/photo-files';
 import { addSeedStep } from './demo';
 
 /** Colour words the demo blankets use, as yarn shades. */
@@ -55,6 +54,7 @@ addSeedStep(async (ctx) => {
     limit: 12,
     transaction: ctx.transaction,
   });
+  const sharp = await loadSharp();
   for (const [i, b] of blankets.entries()) {
     const jpeg = await sharp(Buffer.from(blanketPictureSvg(b.colours, i))).jpeg({ quality: 80 }).toBuffer();
     const prepared = await preparePhoto({ originalname: 'blanket.jpg', size: jpeg.length, buffer: jpeg }, 0);

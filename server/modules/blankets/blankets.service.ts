@@ -1,6 +1,8 @@
 import { Op, col, fn, literal, where as sqlWhere, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import { Blanket } from '../../db/models/blanket';
 import { BlanketEvent } from '../../db/models/blanket-event';
+import { STEP_STATUSES } from '@shared/drive/glance';
+import { arrivalIn, dayOf, needOfBlanket } from '../drive/glance-sql';
 import { Photo } from '../../db/models/photo';
 import { Pledge } from '../../db/models/pledge';
 import { Need } from '../../db/models/need';
@@ -144,6 +146,16 @@ export async function listBlankets(actor: Actor, q: BlanketListQuery): Promise<P
   if (!readsAll(actor) || q.mine) where.userId = actor.id;
   if (q.status) where.status = q.status;
   if (q.pledgeId) where.pledgeId = q.pledgeId;
+  // The filters behind the figures of the drive at a glance, in the same SQL words it counts with.
+  const and: unknown[] = [];
+  if (q.step) and.push({ status: { [Op.in]: STEP_STATUSES[q.step] } });
+  if (q.needId) and.push(sqlWhere(literal(needOfBlanket('`Blanket`.`id`', '`Blanket`.`pledgeId`')), Op.eq, q.needId));
+  if (q.reached && q.from && q.to) {
+    const from = Blanket.sequelize!.escape(q.from);
+    const to = Blanket.sequelize!.escape(q.to);
+    and.push(literal(`EXISTS (SELECT 1 FROM blanket_events e WHERE e.blanketId = \`Blanket\`.\`id\` AND ${arrivalIn(q.reached, 'e')} AND ${dayOf('e.createdAt')} >= ${from} AND ${dayOf('e.createdAt')} < ${to})`));
+  }
+  if (and.length) (where as Record<symbol, unknown>)[Op.and] = and;
   if (q.q) {
     (where as Record<symbol, unknown>)[Op.or] = [
       contains('Blanket.code', q.q),

@@ -4,6 +4,7 @@ import type { RouteDef } from '../route-table';
 import type { Config } from '../../config/env';
 import type { MapTilesResponse } from '@shared/schemas/map';
 import { driveProgress } from './progress.service';
+import { driveGlance } from './glance.service';
 
 export function driveRoutes(config: Pick<Config, 'tiles'>): RouteDef[] {
   return [
@@ -22,6 +23,14 @@ export function driveRoutes(config: Pick<Config, 'tiles'>): RouteDef[] {
       handlers: [
         async (_req, res) => {
           res.json({ progress: await driveProgress() });
+        },
+      ],
+    },
+    {
+      method: 'get', path: '/api/drive/glance', access: ['organiser', 'coordinator'], summary: 'The drive at a glance: blankets at each step per open need and per week, needs at risk, blankets waiting longest, next runs and latest exports',
+      handlers: [
+        async (_req, res) => {
+          res.json({ glance: await driveGlance() });
         },
       ],
     },

@@ -1,10 +1,14 @@
 import fs from 'node:fs/promises';
 import path from 'node:path';
 import { randomBytes } from 'node:crypto';
-import sharp from 'sharp';
+import type Sharp from 'sharp';
 import { fileTypeFromBuffer } from 'file-type';
 import { HttpError } from '../../lib/http-error';
 import { PHOTO_MIME_TYPES, type PhotoMime } from '@shared/schemas/blanket-log';
+
+let sharpModule: Promise<typeof Sharp> | undefined;
+/** sharp (libvips) is loaded on the first photo rather than at start: loading it costs every start ~150 ms. */
+export const loadSharp = (): Promise<typeof Sharp> => (sharpModule ??= import('sharp').then((m) => m.default));
 
 /** Photos live in their own folder under UPLOAD_DIR, outside anything served statically. */
 export const PHOTO_FOLDER = 'photos';
@@ -61,6 +65,7 @@ export async function preparePhoto(file: IncomingFile, index: number): Promise<P
   }
   const mime = type.mime as PhotoMime;
   // The header alone says how big the picture claims to be; a lying file is refused here, unopened.
+  const sharp = await loadSharp();
   let declared: { width?: number; height?: number };
   try {
     declared = await sharp(file.buffer).metadata();

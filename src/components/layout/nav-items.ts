@@ -4,6 +4,7 @@ import { HeartHandshake, MapPin, ScanLine } from 'lucide-react';
 import { ClipboardList, HandHeart, Layers, Waypoints } from 'lucide-react';
 import { CalendarClock } from 'lucide-react';
 import { Truck } from 'lucide-react';
+import { Gauge } from 'lucide-react';
 import type { Role } from '@shared/schemas/user';
 
 export interface NavItem {
@@ -17,6 +18,7 @@ export interface NavItem {
 export const navItems: NavItem[] = [
   { to: '/home', label: 'Home', icon: Home, roles: ['volunteer', 'organiser', 'coordinator'] },
   { to: '/planner', label: 'Planner', icon: Ruler, roles: ['volunteer', 'organiser', 'coordinator'] },
+  { to: '/drive', label: 'At a glance', icon: Gauge, roles: ['organiser', 'coordinator'] },
   { to: '/needs', label: 'What’s needed', icon: HandHeart, roles: ['volunteer', 'organiser', 'coordinator'] },
   { to: '/pledges', label: 'My pledges', icon: ClipboardList, roles: ['volunteer'] },
   { to: '/blankets', label: 'My blankets', icon: Layers, roles: ['volunteer'] },

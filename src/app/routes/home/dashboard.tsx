@@ -1,6 +1,6 @@
 import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
-import { ArrowRight } from 'lucide-react';
+import { ArrowRight, Gauge } from 'lucide-react';
 import { Card } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
 import { ProgressBar } from '@/components/ui/progress-bar';
@@ -62,9 +62,14 @@ function DriveProgress() {
   if (!progress.data) return <Loading label="Gathering the drive’s figures…" />;
   return (
     <section aria-labelledby="progress">
-      <h2 id="progress" className="mb-3 text-2xl font-bold">
-        How the drive is going
-      </h2>
+      <div className="mb-3 flex flex-wrap items-center justify-between gap-3">
+        <h2 id="progress" className="text-2xl font-bold">
+          How the drive is going
+        </h2>
+        <Link to="/drive" className="inline-flex items-center gap-2 text-lg font-bold">
+          <Gauge className="size-5" aria-hidden /> The whole drive at a glance <ArrowRight className="size-4" aria-hidden />
+        </Link>
+      </div>
       <Suspense fallback={<Loading label="Drawing the charts…" />}>
         <ProgressCharts progress={progress.data} />
       </Suspense>

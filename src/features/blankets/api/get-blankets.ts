@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api, qs } from '@/lib/api-client';
 import type { BlanketStatus } from '@shared/schemas/blanket';
+import type { GlanceStep } from '@shared/drive/glance';
 import type { BlanketSort, BlanketSummary } from '@shared/schemas/blanket-log';
 import { MAX_PAGE_SIZE, type Page } from '@shared/schemas/page';
 import { blanketKeys } from './keys';
@@ -9,6 +10,12 @@ import { blanketKeys } from './keys';
 export interface BlanketListParams {
   mine?: boolean;
   status?: BlanketStatus;
+  /** The filters behind the figures of the drive at a glance. */
+  step?: GlanceStep;
+  needId?: number;
+  reached?: GlanceStep;
+  from?: string;
+  to?: string;
   q?: string;
   sort?: BlanketSort;
   dir?: 'asc' | 'desc';

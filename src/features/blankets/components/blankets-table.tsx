@@ -11,7 +11,7 @@ import type { BlanketSort, BlanketSummary } from '@shared/schemas/blanket-log';
 import { pageCount } from '@shared/schemas/page';
 import { Loading } from '@/components/ui/spinner';
 import { QueryError } from '@/components/ui/query-error';
-import { useBlankets } from '../api/get-blankets';
+import { useBlankets, type BlanketListParams } from '../api/get-blankets';
 import { STATUS_LABELS } from '@shared/blankets/status';
 import { formatCm } from '@shared/guidelines/wording';
 import { StatusBadge } from '@/components/ui/status-badge';
@@ -135,7 +135,20 @@ function useSettled<T>(value: T, ms = 300): T {
  * mode): a maker's own (`mine`) or, for staff, the whole drive's. A table on wide screens, cards on
  * phones, both drawn from the same page of rows.
  */
-export function BlanketsTable({ mine, showMaker = false, empty, choosing }: { mine: boolean; showMaker?: boolean; empty: ReactNode; choosing?: Choosing }) {
+export function BlanketsTable({
+  mine,
+  showMaker = false,
+  empty,
+  choosing,
+  fixed,
+}: {
+  mine: boolean;
+  showMaker?: boolean;
+  empty: ReactNode;
+  choosing?: Choosing;
+  /** Filters the page holds (from its address), applied under the search and status. */
+  fixed?: Pick<BlanketListParams, 'step' | 'needId' | 'reached' | 'from' | 'to'>;
+}) {
   // Staff see everyone's blankets, so who made each one is a column of its own.
   const visibleColumns = useMemo(() => {
     const base = showMaker ? [columns[0]!, makerColumn, ...columns.slice(1)] : columns;
@@ -152,6 +165,7 @@ export function BlanketsTable({ mine, showMaker = false, empty, choosing }: { mi
   const query = useBlankets({
     mine: mine || undefined,
     status: status || undefined,
+    ...fixed,
     q: q || undefined,
     sort: sort ? SORTABLE[sort.id] : undefined,
     dir: sort ? (sort.desc ? 'desc' : 'asc') : undefined,
@@ -176,11 +190,12 @@ export function BlanketsTable({ mine, showMaker = false, empty, choosing }: { mi
     getCoreRowModel: getCoreRowModel(),
   });
   // A new search or filter starts again from the first page.
-  useEffect(() => setPagination((p) => ({ ...p, pageIndex: 0 })), [q, status]);
+  const fixedKey = JSON.stringify(fixed ?? {});
+  useEffect(() => setPagination((p) => ({ ...p, pageIndex: 0 })), [q, status, fixedKey]);
 
   if (query.isPending) return <Loading />;
   if (query.error && !page) return <QueryError error={query.error} />;
-  const filtered = q !== '' || status !== '';
+  const filtered = q !== '' || status !== '' || Object.values(fixed ?? {}).some((v) => v !== undefined);
   if (!filtered && total === 0) return <>{empty}</>;
   const rows = table.getRowModel().rows;
 

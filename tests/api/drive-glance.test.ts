@@ -1,0 +1,197 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
+import { Assignment } from '../../server/db/models/assignment';
+import { Blanket } from '../../server/db/models/blanket';
+import { BlanketEvent } from '../../server/db/models/blanket-event';
+import { Export, Run } from '../../server/db/models/run';
+import { Need } from '../../server/db/models/need';
+import { Pledge } from '../../server/db/models/pledge';
+import { driveToday } from '../../server/modules/bookings/drive-clock';
+import { Recipient } from '../../server/db/models/recipient';
+import { GLANCE_STEPS, STEP_STATUSES, arrivalMoves, stepOf, weekAfter, weekOf, type GlanceStep } from '@shared/drive/glance';
+import type { BlanketStatus } from '@shared/schemas/blanket';
+import type { DriveGlance } from '@shared/schemas/glance';
+
+/**
+ * The figures of the drive at a glance are counted by SQL on the server. Here they are counted again
+ * the slow way, row by row in JavaScript, on the demo drive, and the two must agree; and each list a
+ * figure links to must hold as many blankets as the figure says.
+ */
+let t: TestApp;
+let coordinator: Client;
+let glance: DriveGlance;
+
+beforeAll(async () => {
+  t = await makeTestApp();
+  coordinator = await signedIn(t.app, 'coordinator');
+  const res = await coordinator.get('/api/drive/glance');
+  expect(res.status, JSON.stringify(res.body)).toBe(200);
+  glance = res.body.glance as DriveGlance;
+});
+afterAll(async () => t.close());
+
+const day = (d: Date) => d.toISOString().slice(0, 10);
+
+async function recount() {
+  const blankets = await Blanket.findAll({ attributes: ['id', 'status', 'pledgeId', 'createdAt'], raw: true });
+  const live = await Assignment.findAll({ where: { endedAt: null }, attributes: ['blanketId', 'needId'], raw: true });
+  const pledges = await Pledge.findAll({ attributes: ['id', 'needId', 'quantity', 'status', 'createdAt'], raw: true });
+  const events = await BlanketEvent.findAll({ attributes: ['blanketId', 'fromStatus', 'toStatus', 'createdAt'], raw: true });
+  const liveNeed = new Map(live.map((a) => [a.blanketId, a.needId]));
+  const pledgeNeed = new Map(pledges.map((p) => [p.id, p.needId]));
+  const needOf = (b: { id: number; pledgeId: number | null }) => liveNeed.get(b.id) ?? (b.pledgeId ? pledgeNeed.get(b.pledgeId) ?? null : null);
+  return { blankets, pledges, events, needOf };
+}
+
+describe('the drive at a glance agrees with a recount of the demo drive', () => {
+  it('blankets now at each step, in all and per open need', async () => {
+    const { blankets, needOf } = await recount();
+    for (const step of GLANCE_STEPS) {
+      const mine = blankets.filter((b) => stepOf(b.status as BlanketStatus) === step);
+      expect(glance.totals[step], step).toBe(mine.length);
+    }
+    expect(glance.totals.inProgress).toBe(blankets.filter((b) => b.status === 'in_progress').length);
+    expect(glance.totals.declined).toBe(blankets.filter((b) => b.status === 'declined').length);
+    // The demo has something at most steps, or this would prove little.
+    expect(GLANCE_STEPS.filter((s) => glance.totals[s] > 0).length).toBeGreaterThanOrEqual(5);
+
+    const today = await driveToday();
+    const open = await Need.findAll({ where: {}, include: [{ model: Recipient, as: 'recipient' }] });
+    const openIds = open.filter((n) => n.deadline >= today && n.recipient!.active).map((n) => n.id).sort((a, b) => a - b);
+    expect(glance.needs.map((n) => n.needId).sort((a, b) => a - b)).toEqual(openIds);
+    for (const n of glance.needs) {
+      for (const step of GLANCE_STEPS) {
+        const mine = blankets.filter((b) => needOf(b) === n.needId && stepOf(b.status as BlanketStatus) === step);
+        expect(n.now[step], `need ${n.needId} ${step}`).toBe(mine.length);
+      }
+    }
+  });
+
+  it('wanted and pledged per need, and the needs at risk by the stated rule', async () => {
+    const { pledges } = await recount();
+    const today = await driveToday();
+    for (const n of glance.needs) {
+      const need = (await Need.findByPk(n.needId))!;
+      expect(n.wanted).toBe(need.quantity);
+      expect(n.pledged).toBe(pledges.filter((p) => p.needId === n.needId && ['active', 'fulfilled'].includes(p.status)).reduce((s, p) => s + p.quantity, 0));
+      const days = Math.round((Date.parse(need.deadline) - Date.parse(today)) / 86_400_000);
+      expect(n.daysLeft).toBe(days);
+      // The rule the page states: 21 days or less, and too few pledged or assigned (packed and delivered count as assigned).
+      const short = n.pledged < n.wanted || n.assignedSoFar < n.wanted;
+      expect(n.atRisk, `need ${n.needId}`).toBe(days >= 0 && days <= 21 && short);
+    }
+    expect(glance.needs.some((n) => n.atRisk)).toBe(true);
+    expect(glance.needs.some((n) => !n.atRisk)).toBe(true);
+  });
+
+  it('per week: blankets pledged, and distinct blankets that reached each step, from the history', async () => {
+    const { pledges, events } = await recount();
+    expect(glance.weeks.length).toBeGreaterThan(2);
+    for (let i = 1; i < glance.weeks.length; i++) expect(glance.weeks[i]!.week).toBe(weekAfter(glance.weeks[i - 1]!.week));
+    expect(glance.weeks.at(-1)!.week).toBe(weekOf(day(new Date())));
+    const reachedBy = new Map<string, Set<number>>();
+    for (const e of events) {
+      if (!e.toStatus) continue;
+      for (const step of GLANCE_STEPS) {
+        if (!arrivalMoves(step).some((m) => m.from === e.fromStatus && m.to === e.toStatus)) continue;
+        const key = `${weekOf(day(new Date(e.createdAt)))} ${step}`;
+        reachedBy.set(key, (reachedBy.get(key) ?? new Set()).add(e.blanketId));
+      }
+    }
+    let any = 0;
+    for (const w of glance.weeks) {
+      for (const step of GLANCE_STEPS) {
+        expect(w.reached[step], `${w.week} ${step}`).toBe(reachedBy.get(`${w.week} ${step}`)?.size ?? 0);
+        any += w.reached[step];
+      }
+      const p = pledges.filter((x) => ['active', 'fulfilled'].includes(x.status) && weekOf(day(new Date(x.createdAt))) === w.week);
+      expect(w.pledged, w.week).toBe(p.reduce((s, x) => s + x.quantity, 0));
+    }
+    expect(any).toBeGreaterThan(10);
+  });
+
+  it('the blankets waiting longest at each step, since the entry that brought them there', async () => {
+    const { blankets, events } = await recount();
+    for (const w of glance.waiting) {
+      const here = blankets
+        .filter((b) => stepOf(b.status as BlanketStatus) === w.step)
+        .map((b) => {
+          const brought = events.filter((e) => e.blanketId === b.id && e.toStatus === b.status).map((e) => new Date(e.createdAt).getTime());
+          return { id: b.id, since: brought.length ? Math.max(...brought) : new Date(b.createdAt).getTime() };
+        })
+        .sort((a, b) => a.since - b.since || a.id - b.id);
+      expect(w.count, w.step).toBe(here.length);
+      expect(w.longest.map((x) => x.id), w.step).toEqual(here.slice(0, 3).map((x) => x.id));
+      for (const [i, x] of w.longest.entries()) expect(new Date(x.since).getTime()).toBe(here[i]!.since);
+    }
+    expect(glance.waiting.map((w) => w.step)).toEqual(['finished', 'received', 'checked', 'assigned', 'packed']);
+  });
+
+  it('upcoming runs and recent exports', async () => {
+    const today = await driveToday();
+    const upcoming = (await Run.findAll()).filter((r) => r.runDate >= today);
+    expect(glance.upcomingRuns.total).toBe(upcoming.length);
+    expect(glance.upcomingRuns.items.length).toBe(Math.min(5, upcoming.length));
+    expect(glance.upcomingRuns.total).toBeGreaterThan(0);
+    expect(glance.recentExports.total).toBe(await Export.count());
+    const times = glance.recentExports.items.map((e) => e.createdAt);
+    expect([...times].sort().reverse()).toEqual(times);
+  });
+});
+
+describe('each figure links to a list that holds as many blankets', () => {
+  const total = async (query: string) => {
+    const res = await coordinator.get(`/api/blankets?${query}`);
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    return res.body.total as number;
+  };
+
+  it('a step in all, and a step of one need', async () => {
+    for (const step of GLANCE_STEPS) expect(await total(`step=${step}`), step).toBe(glance.totals[step]);
+    let checked = 0;
+    for (const n of glance.needs) {
+      for (const step of GLANCE_STEPS) {
+        if (n.now[step] === 0 && checked > 3) continue;
+        expect(await total(`step=${step}&needId=${n.needId}`), `need ${n.needId} ${step}`).toBe(n.now[step]);
+        checked++;
+      }
+    }
+  });
+
+  it('the blankets that reached a step in a week', async () => {
+    let checked = 0;
+    for (const w of glance.weeks) {
+      for (const step of GLANCE_STEPS as readonly GlanceStep[]) {
+        if (w.reached[step] === 0) continue;
+        expect(await total(`reached=${step}&from=${w.week}&to=${weekAfter(w.week)}`), `${w.week} ${step}`).toBe(w.reached[step]);
+        checked++;
+      }
+    }
+    expect(checked).toBeGreaterThan(5);
+  });
+
+  it('refuses half a filter with the field named (400), never a server error', async () => {
+    const half = await coordinator.get('/api/blankets?reached=received&from=2026-11-02');
+    expect(half.status).toBe(400);
+    expect(half.body.error.issues[0].path).toBe('reached');
+    const badStep = await coordinator.get('/api/blankets?step=knitted');
+    expect(badStep.status).toBe(400);
+    expect(badStep.body.error.issues[0].path).toBe('step');
+    const backwards = await coordinator.get('/api/blankets?reached=received&from=2026-11-09&to=2026-11-02');
+    expect(backwards.status).toBe(400);
+    expect((await coordinator.get('/api/blankets?needId=abc')).status).toBe(400);
+  });
+
+  it('is for staff: a maker is refused', async () => {
+    const volunteer = await signedIn(t.app, 'volunteer');
+    expect((await volunteer.get('/api/drive/glance')).status).toBe(403);
+  });
+});
+
+// STEP_STATUSES is what the lists filter by; every status but in progress and declined belongs to one step.
+it('every status on the way to delivery belongs to exactly one step', () => {
+  const all = GLANCE_STEPS.flatMap((s) => STEP_STATUSES[s]);
+  expect(new Set(all).size).toBe(all.length);
+  expect(stepOf('in_progress')).toBeNull();
+  expect(stepOf('declined')).toBeNull();
+});

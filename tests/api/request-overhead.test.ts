@@ -1,0 +1,109 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { makeTestApp, signedIn, type TestApp, type Client } from './test-app';
+import { Session } from '../../server/db/models/session';
+import { User } from '../../server/db/models/user';
+import { TOUCH_EVERY_MS } from '../../server/app';
+
+/**
+ * What SQLite is asked to run for one signed-in read, seen through sqlite3's trace event on every
+ * connection Sequelize uses (the default one and each transaction's). A statement answered from a
+ * cache never reaches SQLite and so is not seen; one that runs is.
+ */
+type Traceable = { on(event: 'trace', listener: (sql: string) => void): void };
+
+let t: TestApp;
+const seen: string[] = [];
+
+beforeAll(async () => {
+  t = await makeTestApp();
+  const manager = t.sequelize.connectionManager as unknown as { getConnection(o?: object): Promise<Traceable> };
+  const traced = new WeakSet<Traceable>();
+  const watch = (c: Traceable) => {
+    if (traced.has(c)) return;
+    traced.add(c);
+    c.on('trace', (sql) => seen.push(sql));
+  };
+  const original = manager.getConnection.bind(manager);
+  manager.getConnection = async (o?: object) => {
+    const c = await original(o);
+    watch(c);
+    return c;
+  };
+  watch(await original({}));
+});
+afterAll(async () => t.close());
+
+/** sqlite3 hands trace events over asynchronously; let those of earlier statements arrive first. */
+const settle = () => new Promise((r) => setTimeout(r, 20));
+
+async function statementsOf(c: Client, url: string) {
+  await settle();
+  seen.length = 0;
+  const res = await c.get(url);
+  expect(res.status).toBe(200);
+  await settle();
+  return [...seen];
+}
+
+const sessionWrites = (sql: string[]) => sql.filter((s) => /^\s*(UPDATE|INSERT INTO|INSERT OR|DELETE FROM)\s+`?sessions`?/i.test(s));
+const tableInfo = (sql: string[]) => sql.filter((s) => /PRAGMA\s+table_info/i.test(s));
+
+async function sessionOf(email: string) {
+  const user = (await User.findOne({ where: { email } }))!;
+  return (await Session.findAll()).find((r) => r.userId === user.id)!;
+}
+
+describe('the cost of one signed-in read', () => {
+  it('reads the session and the user once each, and writes nothing', async () => {
+    const c = await signedIn(t.app, 'volunteer');
+    await c.get('/api/auth/me');
+    const sql = await statementsOf(c, '/api/auth/me');
+    expect(sessionWrites(sql)).toEqual([]);
+    expect(tableInfo(sql)).toEqual([]);
+    expect(sql.filter((s) => /\bFROM\s+`?sessions`?/i.test(s))).toHaveLength(1);
+    expect(sql.filter((s) => /\bFROM\s+`?users`?/i.test(s))).toHaveLength(1);
+    expect(sql).toHaveLength(2);
+  });
+
+  it('asks no PRAGMA table_info and writes no session on the lists a page loads', async () => {
+    const volunteer = await signedIn(t.app, 'volunteer');
+    const organiser = await signedIn(t.app, 'organiser');
+    const reads: Array<[Client, string]> = [
+      [volunteer, '/api/blankets'],
+      [volunteer, '/api/needs'],
+      [volunteer, '/api/recipients'],
+      [organiser, '/api/blankets'],
+      [organiser, '/api/pledges'],
+      [organiser, '/api/drive/progress'],
+    ];
+    for (const [c, url] of reads) await c.get(url);
+    for (const [c, url] of reads) {
+      const sql = await statementsOf(c, url);
+      expect({ url, writes: sessionWrites(sql), pragmas: tableInfo(sql) }).toEqual({ url, writes: [], pragmas: [] });
+    }
+  });
+
+  it(`renews a session's stamp once it is older than ${TOUCH_EVERY_MS / 1000} s, and only once`, async () => {
+    const c = await signedIn(t.app, 'coordinator');
+    await c.get('/api/auth/me');
+    const row = await sessionOf('coordinator@example.org');
+    const data = JSON.parse(row.data!);
+    data.lastSeen = Date.now() - TOUCH_EVERY_MS - 1_000;
+    await row.update({ data: JSON.stringify(data) });
+
+    const renewing = await statementsOf(c, '/api/auth/me');
+    expect(sessionWrites(renewing)).toHaveLength(1);
+    const stamped = JSON.parse((await sessionOf('coordinator@example.org')).data!).lastSeen;
+    expect(Date.now() - stamped).toBeLessThan(TOUCH_EVERY_MS);
+
+    expect(sessionWrites(await statementsOf(c, '/api/auth/me'))).toEqual([]);
+  });
+
+  it('still refuses a user made inactive since signing in', async () => {
+    const c = await signedIn(t.app, 'priya@example.org');
+    expect((await c.get('/api/auth/me')).status).toBe(200);
+    await User.update({ active: false }, { where: { email: 'priya@example.org' } });
+    expect((await c.get('/api/auth/me')).status).toBe(401);
+    await User.update({ active: true }, { where: { email: 'priya@example.org' } });
+  });
+});
