@@ -21,9 +21,14 @@ export function arrivalIn(step: GlanceStep, e = 'e'): string {
   return `((${e}.fromStatus IS NULL AND ${e}.toStatus IN (${sqlList(logged)}))${moved.map((m) => ` OR ${m}`).join('')})`;
 }
 
-/** The step a history entry (alias `e`) reached, or NULL when it reached none. */
-export function arrivalStepCase(e = 'e'): string {
-  return `CASE ${GLANCE_STEPS.map((s) => `WHEN ${arrivalIn(s, e)} THEN ${quote(s)}`).join(' ')} ELSE NULL END`;
+/**
+ * Every (from, to, step) that means reaching a step, as a table to join history entries (alias `e`)
+ * to: `m.step` is the step reached. A blanket logged straight into a step has from ''.
+ */
+export function arrivalJoin(e = 'e'): string {
+  const rows = GLANCE_STEPS.flatMap((step) => arrivalMoves(step).map((m) => `(${quote(m.from ?? '')}, ${quote(m.to)}, ${quote(step)})`));
+  return `JOIN (SELECT column1 AS fromStatus, column2 AS toStatus, column3 AS step FROM (VALUES ${rows.join(', ')})) m
+    ON m.toStatus = ${e}.toStatus AND m.fromStatus = COALESCE(${e}.fromStatus, '')`;
 }
 
 /** The step a blanket status belongs to, as SQL over a status column. */
@@ -31,6 +36,10 @@ export function stepCase(statusColumn: string): string {
   return `CASE ${GLANCE_STEPS.map((s) => `WHEN ${statusColumn} IN (${sqlList(STEP_STATUSES[s])}) THEN ${quote(s)}`).join(' ')} ELSE NULL END`;
 }
 
-/** The UTC day of a stored timestamp, and the Monday that starts its week. */
-export const dayOf = (column: string) => `date(${column})`;
-export const weekOfSql = (column: string) => `date(${column}, '-6 days', 'weekday 1')`;
+/**
+ * The UTC day of a stored timestamp, and the Monday that starts its week. Sequelize keeps times in
+ * UTC as text beginning YYYY-MM-DD, so the day is its first ten characters: cheaper than parsing
+ * each one with date(), which a count over the whole history would pay for every row.
+ */
+export const dayOf = (column: string) => `substr(${column}, 1, 10)`;
+export const weekOfSql = (column: string) => `date(${dayOf(column)}, '-6 days', 'weekday 1')`;

@@ -2,12 +2,12 @@ import { Op, QueryTypes } from 'sequelize';
 import { Need } from '../../db/models/need';
 import { Recipient } from '../../db/models/recipient';
 import { STEP_STATUSES, riskOf, weekAfter, weekOf, type GlanceStep } from '@shared/drive/glance';
-import type { DriveGlance, GlanceNeed, GlanceWeek, StepCounts, WaitingBlanket } from '@shared/schemas/glance';
+import type { DriveGlance, GlanceNeed, GlanceWeek, StepCounts } from '@shared/schemas/glance';
 import { needCounts, PROMISING_PLEDGE_STATUSES } from '../pledges/need-counts';
 import { driveNow } from '../bookings/drive-clock';
 import { listRuns } from '../runs/runs.service';
 import { listExports } from '../runs/manifest.service';
-import { arrivalStepCase, needOfBlanket, sqlList, stepCase, weekOfSql } from './glance-sql';
+import { arrivalJoin, needOfBlanket, sqlList, stepCase, weekOfSql } from './glance-sql';
 
 const emptySteps = (): StepCounts => ({ finished: 0, received: 0, checked: 0, assigned: 0, packed: 0, delivered: 0 });
 
@@ -108,10 +108,9 @@ export async function driveGlance(): Promise<DriveGlance> {
 async function timeline(todayUtc: string): Promise<GlanceWeek[]> {
   const sequelize = Need.sequelize!;
   const reached = await sequelize.query<{ week: string; step: GlanceStep; n: number }>(
-    `SELECT week, step, COUNT(DISTINCT blanketId) AS n FROM (
-       SELECT ${weekOfSql('e.createdAt')} AS week, ${arrivalStepCase('e')} AS step, e.blanketId AS blanketId
-       FROM blanket_events e WHERE e.toStatus IS NOT NULL
-     ) WHERE step IS NOT NULL GROUP BY week, step`,
+    `SELECT ${weekOfSql('e.createdAt')} AS week, m.step AS step, COUNT(DISTINCT e.blanketId) AS n
+     FROM blanket_events e ${arrivalJoin('e')}
+     GROUP BY week, m.step`,
     { type: QueryTypes.SELECT },
   );
   const pledged = await sequelize.query<{ week: string; n: number }>(
@@ -142,32 +141,32 @@ async function timeline(todayUtc: string): Promise<GlanceWeek[]> {
  */
 async function waitingLongest(now: Date): Promise<DriveGlance['waiting']> {
   const sequelize = Need.sequelize!;
-  const statuses = WAITING_STEPS.flatMap((s) => STEP_STATUSES[s]);
-  const rows = await sequelize.query<{ id: number; code: string; step: GlanceStep; since: string | Date; recipientName: string | null; rn: number; total: number }>(
-    `WITH here AS (
-       SELECT b.id, b.code, b.recipientId, ${stepCase('b.status')} AS step,
-         COALESCE((SELECT MAX(e.createdAt) FROM blanket_events e WHERE e.blanketId = b.id AND e.toStatus = b.status), b.createdAt) AS since
-       FROM blankets b WHERE b.status IN (${sqlList(statuses)})
-     ), ranked AS (
-       SELECT here.*, ROW_NUMBER() OVER (PARTITION BY step ORDER BY since ASC, id ASC) AS rn, COUNT(*) OVER (PARTITION BY step) AS total FROM here
-     )
-     SELECT ranked.id, ranked.code, ranked.step, ranked.since, r.name AS recipientName, ranked.rn, ranked.total
-     FROM ranked LEFT JOIN recipients r ON r.id = ranked.recipientId
-     WHERE ranked.rn <= :longest ORDER BY ranked.step, ranked.rn`,
+  const since = `COALESCE((SELECT MAX(e.createdAt) FROM blanket_events e WHERE e.blanketId = b.id AND e.toStatus = b.status), b.createdAt)`;
+  // Each step's few longest, then how many stand at each step: a sort per step is cheaper than
+  // ranking every blanket of the drive in one window.
+  const longest = await sequelize.query<{ id: number; code: string; step: GlanceStep; since: string | Date; recipientName: string | null }>(
+    WAITING_STEPS.map(
+      (step) => `SELECT * FROM (
+        SELECT b.id AS id, b.code AS code, ${quote(step)} AS step, ${since} AS since, r.name AS recipientName
+        FROM blankets b LEFT JOIN recipients r ON r.id = b.recipientId
+        WHERE b.status IN (${sqlList(STEP_STATUSES[step])})
+        ORDER BY since ASC, b.id ASC LIMIT :longest)`,
+    ).join(' UNION ALL '),
     { type: QueryTypes.SELECT, replacements: { longest: LONGEST } },
   );
-  return WAITING_STEPS.map((step) => {
-    const mine = rows.filter((r) => r.step === step);
-    const longest: WaitingBlanket[] = mine.map((r) => {
-      const since = storedDate(r.since);
-      return {
-        id: r.id,
-        code: r.code,
-        since: since.toISOString(),
-        days: Math.max(0, Math.floor((now.getTime() - since.getTime()) / DAY_MS)),
-        recipientName: r.recipientName,
-      };
-    });
-    return { step, count: Number(mine[0]?.total ?? 0), longest };
+  const counts = await sequelize.query<{ step: GlanceStep | null; n: number }>(`SELECT ${stepCase('status')} AS step, COUNT(*) AS n FROM blankets GROUP BY 1`, {
+    type: QueryTypes.SELECT,
   });
+  return WAITING_STEPS.map((step) => ({
+    step,
+    count: Number(counts.find((c) => c.step === step)?.n ?? 0),
+    longest: longest
+      .filter((r) => r.step === step)
+      .map((r) => {
+        const at = storedDate(r.since);
+        return { id: r.id, code: r.code, since: at.toISOString(), days: Math.max(0, Math.floor((now.getTime() - at.getTime()) / DAY_MS)), recipientName: r.recipientName };
+      }),
+  }));
 }
+
+const quote = (s: string) => `'${s}'`;

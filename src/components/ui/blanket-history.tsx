@@ -1,6 +1,7 @@
 import { STATUS_LABELS } from '@shared/blankets/status';
 import type { BlanketStatus } from '@shared/schemas/blanket';
 import { formatMoment } from './format-day';
+import { useDriveClock } from '@/lib/drive-clock';
 
 /** One step of a blanket's history as both the maker's page and the intake page receive it. */
 export interface HistoryEvent {
@@ -66,24 +67,28 @@ export function eventDetail(e: HistoryEvent): string | null {
 
 /** Every step of the blanket's life, oldest first, with who took it, when, and why when they said. */
 export function BlanketHistory({ events }: { events: HistoryEvent[] }) {
+  const zone = useDriveClock().data?.timeZone;
   if (events.length === 0) return <p className="text-ink-soft">Nothing recorded yet.</p>;
   return (
-    <ol className="space-y-3 border-l-4 border-heather-100 pl-5" data-testid="blanket-history" aria-label="History">
-      {events.map((e) => {
-        const detail = eventDetail(e);
-        return (
-          <li key={e.id} className="relative">
-            <span className="absolute -left-[1.85rem] top-1.5 size-3 rounded-full border-2 border-white bg-heather-500" aria-hidden />
-            <p className="font-bold">{describeEvent(e)}</p>
-            <p className="text-sm text-ink-soft">
-              {formatMoment(e.createdAt)}
-              {e.actor ? ` · ${e.actor.name}` : ''}
-            </p>
-            {detail && <p className="text-sm">{detail}</p>}
-            {e.reason && <p className="mt-1 rounded-lg bg-oat-100 px-3 py-1">“{e.reason}”</p>}
-          </li>
-        );
-      })}
-    </ol>
+    <>
+      <ol className="space-y-3 border-l-4 border-heather-100 pl-5" data-testid="blanket-history" aria-label="History">
+        {events.map((e) => {
+          const detail = eventDetail(e);
+          return (
+            <li key={e.id} className="relative">
+              <span className="absolute -left-[1.85rem] top-1.5 size-3 rounded-full border-2 border-white bg-heather-500" aria-hidden />
+              <p className="font-bold">{describeEvent(e)}</p>
+              <p className="text-sm text-ink-soft">
+                {formatMoment(e.createdAt, zone)}
+                {e.actor ? ` · ${e.actor.name}` : ''}
+              </p>
+              {detail && <p className="text-sm">{detail}</p>}
+              {e.reason && <p className="mt-1 rounded-lg bg-oat-100 px-3 py-1">“{e.reason}”</p>}
+            </li>
+          );
+        })}
+      </ol>
+      {zone && <p className="mt-3 text-sm text-ink-soft">Times are {zone} time, the drive's clock.</p>}
+    </>
   );
 }

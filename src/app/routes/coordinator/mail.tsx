@@ -14,9 +14,14 @@ import { useGiveUp, useSendAgain } from '@/features/mail/api/outbox-actions';
 import { cn } from '@/components/ui/cn';
 import { pageCount } from '@shared/schemas/page';
 import type { MailStatus, OutboxItem, OutboxShow } from '@shared/schemas/mail';
+import { useDriveClock } from '@/lib/drive-clock';
+import { ZoneNote } from '@/components/ui/zone-note';
 
-const timeFmt = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
-const when = (iso: string) => timeFmt.format(new Date(iso));
+/** Formats moments on the drive's clock (its zone, named once on the page). */
+function useWhen() {
+  const zone = useDriveClock().data?.timeZone;
+  return (iso: string) => new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: zone }).format(new Date(iso));
+}
 
 /**
  * Plain-text mail as text. Only links back to Kindloop itself become clickable: anything else in a
@@ -63,6 +68,7 @@ const statusWords: Record<MailStatus, { tone: Tone; text: string }> = {
 };
 
 function OutboxRow({ m }: { m: OutboxItem }) {
+  const when = useWhen();
   const again = useSendAgain();
   const stop = useGiveUp();
   const status = statusWords[m.status];
@@ -159,6 +165,8 @@ export default function MailPage() {
   const [openId, setOpenId] = useState<number | null>(null);
   const items = data?.mail.items ?? [];
   const open = items.find((m) => m.id === openId) ?? items[0];
+  const when = useWhen();
+  const zone = useDriveClock().data?.timeZone;
   return (
     <div>
       <PageHeader
@@ -173,6 +181,7 @@ export default function MailPage() {
           </div>
         )}
       />
+      <ZoneNote zone={zone} className="mb-4" />
       <Outbox />
       <h2 className="mb-2 text-2xl font-bold">Kept here</h2>
       <Alert kind="info" className="mb-4" title="Reset links are for their owner only">

@@ -12,6 +12,7 @@ import { useSites } from '@/features/sites/api/get-sites';
 import { useSaveSite } from '@/features/sites/api/save-site';
 import { SiteForm, TOWN_CENTRE } from '@/features/sites/components/site-form';
 import { ScheduleForm, hoursSummary } from '@/features/sites/components/schedule-form';
+import { DriveZoneForm } from '@/features/sites/components/drive-zone-form';
 
 export default function SitesPage() {
   const { data, isPending, error } = useSites('all');
@@ -41,6 +42,7 @@ export default function SitesPage() {
         <QueryError error={error} />
       ) : (
         <div className="space-y-6">
+          <DriveZoneForm />
           {editing === 'new' && (
             <Card>
               <CardTitle>New drop-off site</CardTitle>

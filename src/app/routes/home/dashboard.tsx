@@ -14,6 +14,8 @@ import { Badge } from '@/components/ui/badge';
 import { useMyPledges } from '@/features/pledges/api/get-pledges';
 import { useMyBlankets } from '@/features/blankets/api/get-blankets';
 import { formatDay } from '@/components/ui/format-day';
+import { useDriveToday } from '@/lib/drive-clock';
+import { daysUntil } from '@/components/ui/format-day';
 
 /** A maker's own part of the drive at a glance: what they promised, made and handed in. */
 function MyPart() {
@@ -81,17 +83,17 @@ const leads = {
   coordinator: 'Keep an eye on pledges against needs, look after recipients, sites and people, and plan the deliveries.',
 } as const;
 
-const dayMs = 86_400_000;
-
 export default function DashboardPage() {
   const { data: user } = useMe();
   const { data } = useDrive();
+  const today = useDriveToday();
   if (!user) return null;
   const drive = data?.drive;
-  const start = drive ? new Date(drive.startsOn).getTime() : 0;
-  const end = drive ? new Date(drive.endsOn).getTime() : 0;
-  const elapsed = drive ? (Date.now() - start) / (end - start) : 0;
-  const daysLeft = drive ? Math.max(0, Math.ceil((end - Date.now()) / dayMs)) : 0;
+  // Whole days of the drive's calendar, counted from the drive's today.
+  const start = drive ? daysUntil(drive.startsOn.slice(0, 10), today) : 0;
+  const end = drive ? daysUntil(drive.endsOn.slice(0, 10), today) : 0;
+  const elapsed = drive && end !== start ? -start / (end - start) : 0;
+  const daysLeft = drive ? Math.max(0, end) : 0;
   const items = navItems.filter((i) => i.roles.includes(user.role) && i.to !== '/home');
   return (
     <div className="space-y-8">

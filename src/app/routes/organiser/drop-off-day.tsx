@@ -13,7 +13,7 @@ import { QueryError } from '@/components/ui/query-error';
 import { EmptyState } from '@/components/ui/empty-state';
 import { useSites } from '@/features/sites/api/get-sites';
 import { useSiteDay } from '@/features/drop-off/api/get-bookings';
-import { useClock } from '@/features/drop-off/api/get-clock';
+import { useDriveClock } from '@/lib/drive-clock';
 import { useMarkMissed } from '@/features/drop-off/api/book';
 import { dayIn, plusDays, timeIn } from '@/features/drop-off/components/when';
 
@@ -28,7 +28,7 @@ const ARRIVAL: Record<BookingView['arrival'], { label: string; tone: Tone }> = {
 /** Who is coming to a site on a day, when, with which blankets, and who did not come. */
 export default function DropOffDayPage() {
   const [params, setParams] = useSearchParams();
-  const clock = useClock();
+  const clock = useDriveClock();
   const sites = useSites('true');
   const siteId = Number(params.get('siteId')) || sites.data?.[0]?.id || null;
   const day = params.get('day') ?? clock.data?.today ?? null;
@@ -49,7 +49,7 @@ export default function DropOffDayPage() {
 
   return (
     <div className="space-y-6">
-      <PageHeader title="Drop-off day" lead={<>Who is booked to bring blankets to a site on a day, and who has come. Times are <strong>{zone}</strong> time.</>} />
+      <PageHeader title="Drop-off day" lead={<>Who is booked to bring blankets to a site on a day, who has come and who did not. Times are <strong>{zone}</strong> time.</>} />
       <Card className="flex flex-wrap items-end gap-4">
         <Field label="Site" className="min-w-56 flex-1">
           {({ id }) => (

@@ -18,7 +18,7 @@ import { TOWN_CENTRE } from '@/features/sites/components/site-form';
 import { useSoonest } from '@/features/drop-off/api/get-soonest';
 import { useMyBookings } from '@/features/drop-off/api/get-bookings';
 import { useFinishedBlankets } from '@/features/drop-off/api/get-finished-blankets';
-import { useClock } from '@/features/drop-off/api/get-clock';
+import { useDriveClock } from '@/lib/drive-clock';
 import { useReminders, useSetReminders } from '@/features/drop-off/api/reminders';
 import { useSetThankYouMail, useThankYouMail } from '@/features/drop-off/api/thank-you-mail';
 import { useCancelBooking, useCreateBooking, useMoveBooking } from '@/features/drop-off/api/book';
@@ -34,7 +34,7 @@ interface Choice {
 export default function DropOffPage() {
   const [params] = useSearchParams();
   const preselected = Number(params.get('blanket')) || null;
-  const clock = useClock();
+  const clock = useDriveClock();
   const zone = clock.data?.timeZone ?? 'UTC';
   const today = clock.data?.today ?? new Date().toISOString().slice(0, 10);
   const mine = useMyBookings();

@@ -7,5 +7,4 @@ export const dropOffKeys = {
   finished: () => [...dropOffKeys.all, 'finished-blankets'] as const,
   reminders: () => [...dropOffKeys.all, 'reminders'] as const,
   thankYou: () => [...dropOffKeys.all, 'thank-you-mail'] as const,
-  clock: () => [...dropOffKeys.all, 'clock'] as const,
 };

@@ -5,13 +5,14 @@ import { Badge } from '@/components/ui/badge';
 import { ProgressBar } from '@/components/ui/progress-bar';
 import { Cautions } from '@/components/ui/cautions';
 import { daysUntil, formatDay } from '@/components/ui/format-day';
+import { useDriveToday } from '@/lib/drive-clock';
 import { POPULATION_LABELS } from '@shared/schemas/blanket';
 import type { OpenNeed, RecipientBrief } from '@shared/schemas/pledge';
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import { capitalise } from '@shared/guidelines/wording';
 
 function NeedRow({ need, action }: { need: OpenNeed; action?: ReactNode }) {
-  const days = daysUntil(need.deadline);
+  const days = daysUntil(need.deadline, useDriveToday());
   const filled = need.quantity > 0 ? need.pledged / need.quantity : 0;
   return (
     <li className="space-y-3 rounded-xl border border-oat-200 bg-oat-50 p-4" data-testid={`need-${need.id}`}>

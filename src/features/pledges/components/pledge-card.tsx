@@ -9,7 +9,8 @@ import { Field, Input } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { ProgressBar } from '@/components/ui/progress-bar';
 import { applyServerErrors } from '@/components/ui/form-errors';
-import { daysUntil, formatDay, isoDayFromToday } from '@/components/ui/format-day';
+import { daysUntil, formatDay, isoDayFrom } from '@/components/ui/format-day';
+import { useDriveToday } from '@/lib/drive-clock';
 import { MAX_PLEDGE_QUANTITY, PledgeCreateSchema, type PledgeView } from '@shared/schemas/pledge';
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import { useUpdatePledge } from '../api/update-pledge';
@@ -18,11 +19,11 @@ import { useCancelPledge } from '../api/cancel-pledge';
 /** How far a late pledge moves with one press: two weeks, or to the need's deadline if sooner. */
 export const PUSH_BACK_DAYS = 14;
 
-export function pushBackDate(p: PledgeView): string {
-  const twoWeeks = isoDayFromToday(PUSH_BACK_DAYS);
+export function pushBackDate(p: PledgeView, today: string): string {
+  const twoWeeks = isoDayFrom(today, PUSH_BACK_DAYS);
   const deadline = p.need?.deadline;
   // Past the deadline the need is closing anyway; two weeks is still the honest new date.
-  return deadline && deadline >= isoDayFromToday(1) && deadline < twoWeeks ? deadline : twoWeeks;
+  return deadline && deadline >= isoDayFrom(today, 1) && deadline < twoWeeks ? deadline : twoWeeks;
 }
 
 interface EditValues {
@@ -32,6 +33,7 @@ interface EditValues {
 
 function EditPledge({ pledge, onClose, onChanged }: { pledge: PledgeView; onClose: () => void; onChanged?: () => void }) {
   const update = useUpdatePledge(onChanged);
+  const today = useDriveToday();
   const { register, handleSubmit, formState, setError } = useForm<EditValues>({
     resolver: zodResolver(PledgeCreateSchema.pick({ quantity: true, dueDate: true })),
     defaultValues: { quantity: pledge.quantity, dueDate: pledge.dueDate },
@@ -53,7 +55,7 @@ function EditPledge({ pledge, onClose, onChanged }: { pledge: PledgeView; onClos
           )}
         </Field>
         <Field label="I'll finish by" error={e.dueDate?.message}>
-          {({ id, describedBy, invalid }) => <Input id={id} type="date" min={isoDayFromToday()} aria-describedby={describedBy} aria-invalid={invalid} {...register('dueDate')} />}
+          {({ id, describedBy, invalid }) => <Input id={id} type="date" min={today} aria-describedby={describedBy} aria-invalid={invalid} {...register('dueDate')} />}
         </Field>
       </div>
       <div className="flex flex-wrap gap-2">
@@ -75,7 +77,8 @@ export function PledgeCard({ pledge, onChanged }: { pledge: PledgeView; onChange
   const update = useUpdatePledge(onChanged);
   const cancel = useCancelPledge(onChanged);
   const where = pledge.need?.recipient.name ?? 'Wherever it’s needed most';
-  const days = daysUntil(pledge.dueDate);
+  const today = useDriveToday();
+  const days = daysUntil(pledge.dueDate, today);
   const open = pledge.status !== 'cancelled';
   const room = pledge.quantity - pledge.blanketsLogged;
   const headingId = `pledge-${pledge.id}`;
@@ -113,9 +116,9 @@ export function PledgeCard({ pledge, onChanged }: { pledge: PledgeView; onChange
             <Button
               variant="secondary"
               busy={update.isPending}
-              onClick={() => update.mutate({ id: pledge.id, version: pledge.version, dueDate: pushBackDate(pledge) })}
+              onClick={() => update.mutate({ id: pledge.id, version: pledge.version, dueDate: pushBackDate(pledge, today) })}
             >
-              Push back to {formatDay(pushBackDate(pledge))}
+              Push back to {formatDay(pushBackDate(pledge, today))}
             </Button>
           </div>
         </Alert>

@@ -5,7 +5,8 @@ import { Button } from '@/components/ui/button';
 import { Field, Input, Select } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { applyServerErrors } from '@/components/ui/form-errors';
-import { formatDay, isoDayFromToday } from '@/components/ui/format-day';
+import { formatDay, isoDayFrom } from '@/components/ui/format-day';
+import { useDriveToday } from '@/lib/drive-clock';
 import { SIZE_CATEGORIES, type SizeCategory } from '@shared/schemas/blanket';
 import { MAX_PLEDGE_QUANTITY, PledgeCreateSchema, type PledgeCreate, type PledgeView } from '@shared/schemas/pledge';
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
@@ -34,7 +35,8 @@ const FIELDS = ['needId', 'quantity', 'sizeCategory', 'dueDate'] as const;
 /** "I'll make N by this day": quantity and date, and the size when no need is chosen. */
 export function PledgeForm({ target, onDone, onChanged, onCancel }: Props) {
   const create = useCreatePledge(onChanged);
-  const fourWeeks = isoDayFromToday(28);
+  const today = useDriveToday();
+  const fourWeeks = isoDayFrom(today, 28);
   const { register, handleSubmit, formState, setError, setFocus } = useForm<PledgeCreate>({
     resolver: zodResolver(PledgeCreateSchema),
     defaultValues: {
@@ -83,7 +85,7 @@ export function PledgeForm({ target, onDone, onChanged, onCancel }: Props) {
         )}
         <Field label="I'll finish by" hint={target ? `Needed by ${formatDay(target.deadline)}` : 'A day you can keep to'} error={e.dueDate?.message}>
           {({ id, describedBy, invalid }) => (
-            <Input id={id} type="date" min={isoDayFromToday()} max={target?.deadline} aria-describedby={describedBy} aria-invalid={invalid} {...register('dueDate')} />
+            <Input id={id} type="date" min={today} max={target?.deadline} aria-describedby={describedBy} aria-invalid={invalid} {...register('dueDate')} />
           )}
         </Field>
       </div>

@@ -4,7 +4,8 @@ import { Button } from '@/components/ui/button';
 import { Checkbox, Field, Input, Select, Textarea } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { EmptyState } from '@/components/ui/empty-state';
-import { isoDayFromToday } from '@/components/ui/format-day';
+import { isoDayFrom } from '@/components/ui/format-day';
+import { useDriveToday } from '@/lib/drive-clock';
 import { ApiError } from '@/lib/api-client';
 import { POPULATION_LABELS } from '@shared/schemas/blanket';
 import type { RunCreate, WaitingRecipient } from '@shared/schemas/run';
@@ -30,7 +31,8 @@ export function PlanRunForm({
   error: unknown;
   onSubmit: (input: RunCreate) => void;
 }) {
-  const [runDate, setRunDate] = useState(isoDayFromToday(2));
+  const today = useDriveToday();
+  const [runDate, setRunDate] = useState(isoDayFrom(today, 2));
   const [driverId, setDriverId] = useState<number | ''>('');
   const [startSiteId, setStartSiteId] = useState<number | ''>(sites[0]?.id ?? '');
   const [chosen, setChosen] = useState<number[]>([]);
