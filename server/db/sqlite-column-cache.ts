@@ -50,6 +50,12 @@ class CachingDatabase extends sqlite3.Database {
     const callback = rest[rest.length - 1];
     if (match && rest.length === 1 && typeof callback === 'function') {
       const table = match[1]!;
+      // For some includes (a through table) Sequelize names the table `undefined`; there is no such
+      // table, so the answer is always empty and is not worth a statement on every request.
+      if (table === 'undefined') {
+        process.nextTick(() => (callback as Callback).call(this, null, []));
+        return this;
+      }
       const cached = this.columnInfo.get(table);
       if (cached) {
         process.nextTick(() => (callback as Callback).call(this, null, cached));

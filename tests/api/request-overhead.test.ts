@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { makeTestApp, signedIn, type TestApp, type Client } from './test-app';
 import { Session } from '../../server/db/models/session';
 import { User } from '../../server/db/models/user';
+import { Site } from '../../server/db/models/site';
 import { TOUCH_EVERY_MS } from '../../server/app';
 
 /**
@@ -68,6 +69,7 @@ describe('the cost of one signed-in read', () => {
   it('asks no PRAGMA table_info and writes no session on the lists a page loads', async () => {
     const volunteer = await signedIn(t.app, 'volunteer');
     const organiser = await signedIn(t.app, 'organiser');
+    const site = (await Site.findOne({ where: { active: true } }))!;
     const reads: Array<[Client, string]> = [
       [volunteer, '/api/blankets'],
       [volunteer, '/api/needs'],
@@ -75,6 +77,7 @@ describe('the cost of one signed-in read', () => {
       [organiser, '/api/blankets'],
       [organiser, '/api/pledges'],
       [organiser, '/api/drive/progress'],
+      [organiser, `/api/intake/queue?siteId=${site.id}`],
     ];
     for (const [c, url] of reads) await c.get(url);
     for (const [c, url] of reads) {

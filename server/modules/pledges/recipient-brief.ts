@@ -15,7 +15,10 @@ export const guidelinesOf = storedGuidelines;
 const briefs = new Map<string, RecipientBrief>();
 const MAX_BRIEFS = 500;
 
-export function recipientBrief(r: Recipient): RecipientBrief {
+/** What a brief reads of a recipient: an instance or the plain values of a list's row. */
+export type BriefSource = Pick<Recipient, 'id' | 'version' | 'updatedAt' | 'name' | 'kind' | 'population' | 'guidelines'>;
+
+export function recipientBrief(r: BriefSource): RecipientBrief {
   const key = `${r.id}:${r.version}:${new Date(r.updatedAt).getTime()}`;
   const known = briefs.get(key);
   if (known) return known;
@@ -25,7 +28,7 @@ export function recipientBrief(r: Recipient): RecipientBrief {
   return brief;
 }
 
-function buildBrief(r: Recipient): RecipientBrief {
+function buildBrief(r: BriefSource): RecipientBrief {
   const guidelines = guidelinesOf(r);
   return {
     id: r.id,
