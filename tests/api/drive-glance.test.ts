@@ -227,3 +227,21 @@ it('every status on the way to delivery belongs to exactly one step', () => {
   expect(stepOf('in_progress')).toBeNull();
   expect(stepOf('declined')).toBeNull();
 });
+
+describe('a drive with nothing in it yet', () => {
+  it('counts zeros, no weeks and nothing waiting, without an error', async () => {
+    const empty = await makeTestApp({ seed: false });
+    try {
+      const { driveGlance } = await import('../../server/modules/drive/glance.service');
+      const g = await driveGlance();
+      expect(g.needs).toEqual([]);
+      expect(g.weeks).toEqual([]);
+      for (const s of GLANCE_STEPS) expect(g.totals[s]).toBe(0);
+      expect(g.waiting.every((w) => w.count === 0 && w.longest.length === 0)).toBe(true);
+      expect(g.upcomingRuns.total).toBe(0);
+      expect(g.recentExports.total).toBe(0);
+    } finally {
+      await empty.close();
+    }
+  });
+});
