@@ -23,7 +23,7 @@ describe('findAllPlain', () => {
       ],
       order: [['id', 'ASC']] as [string, string][],
     };
-    const instances = (await Blanket.findAll(options)).map((b) => b.get({ plain: true }));
+    const instances = (await Blanket.findAll(options)).map((b) => b.get({ plain: true }) as Record<string, unknown>);
     const plain = await findAllPlain(Blanket, options);
     expect(plain.length).toBeGreaterThan(3);
     expect(plain).toEqual(instances);
