@@ -1,3 +1,4 @@
+import { z } from 'zod';
 import type { GlanceStep, RiskReason } from '../drive/glance';
 import type { SizeCategory } from './blanket';
 import type { ExportView, RunSummary } from './run';
@@ -49,3 +50,9 @@ export interface DriveGlance {
   upcomingRuns: { items: RunSummary[]; total: number };
   recentExports: { items: ExportView[]; total: number };
 }
+
+/** GET /api/drive/glance/weeks: the week-by-week figures of one need. */
+export const GlanceWeeksQuerySchema = z.object({
+  needId: z.coerce.number({ error: 'needId must be a number' }).int('needId must be a whole number').positive('needId must be positive'),
+});
+export type GlanceWeeksQuery = z.infer<typeof GlanceWeeksQuerySchema>;

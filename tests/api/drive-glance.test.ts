@@ -110,6 +110,38 @@ describe('the drive at a glance agrees with a recount of the demo drive', () => 
     expect(any).toBeGreaterThan(10);
   });
 
+  it('week by week for one need: its pledges, and the blankets that count for it', async () => {
+    const { blankets, pledges, events, needOf } = await recount();
+    const need = [...glance.needs].sort((a, b) => GLANCE_STEPS.reduce((s, x) => s + b.now[x] - a.now[x], 0))[0]!;
+    const res = await coordinator.get(`/api/drive/glance/weeks?needId=${need.needId}`);
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    const weeks = res.body.weeks as DriveGlance['weeks'];
+    const mine = new Set(blankets.filter((b) => needOf(b) === need.needId).map((b) => b.id));
+    expect(mine.size).toBeGreaterThan(3);
+    let any = 0;
+    for (const w of weeks) {
+      for (const step of GLANCE_STEPS) {
+        const ids = new Set(
+          events
+            .filter((e) => mine.has(e.blanketId) && weekOf(day(new Date(e.createdAt))) === w.week)
+            .filter((e) => arrivalMoves(step).some((m) => m.from === e.fromStatus && m.to === e.toStatus))
+            .map((e) => e.blanketId),
+        );
+        expect(w.reached[step], `${w.week} ${step}`).toBe(ids.size);
+        any += ids.size;
+        if (ids.size > 0) {
+          const list = await coordinator.get(`/api/blankets?reached=${step}&from=${w.week}&to=${weekAfter(w.week)}&needId=${need.needId}`);
+          expect(list.body.total, `list for ${w.week} ${step}`).toBe(ids.size);
+        }
+      }
+      const p = pledges.filter((x) => x.needId === need.needId && ['active', 'fulfilled'].includes(x.status) && weekOf(day(new Date(x.createdAt))) === w.week);
+      expect(w.pledged, w.week).toBe(p.reduce((s, x) => s + x.quantity, 0));
+    }
+    expect(any).toBeGreaterThan(3);
+    expect((await coordinator.get('/api/drive/glance/weeks')).status).toBe(400);
+    expect((await coordinator.get('/api/drive/glance/weeks?needId=-2')).body.error.issues[0].path).toBe('needId');
+  });
+
   it('the blankets waiting longest at each step, since the entry that brought them there', async () => {
     const { blankets, events } = await recount();
     for (const w of glance.waiting) {

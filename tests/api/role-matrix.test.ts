@@ -18,6 +18,7 @@ const matrix: Record<string, Row> = {
   'GET /api/drive': PUBLIC,
   'GET /api/drive/progress': STAFF,
   'GET /api/drive/glance': STAFF,
+  'GET /api/drive/glance/weeks': STAFF,
   'GET /api/health': PUBLIC,
   'GET /api/map': PUBLIC,
   'GET /api/auth/csrf': PUBLIC,

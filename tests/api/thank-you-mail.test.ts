@@ -125,4 +125,30 @@ describe('the thank-you e-mail on delivery', () => {
     expect(bad.status).toBe(400);
     expect(bad.body.error.issues[0].path).toBe('thankYouMail');
   });
+
+  it('in the demo, delivering the upcoming run thanks the makers who opted in and no one else', async () => {
+    // The demo's run later this week, not the runs the tests above planned for today.
+    const upcoming = await coordinator.get('/api/runs?when=upcoming&pageSize=50');
+    const demoRun = (upcoming.body.items as RunView[]).find((r) => r.runDate > today)!;
+    const run = (await coordinator.get(`/api/runs/${demoRun.id}`)).body.run as RunView;
+    const packed = run.stops.filter((s) => s.state === 'packed');
+    expect(packed.length).toBeGreaterThan(1);
+    const makers = await User.findAll({ where: { email: ['ines@example.org', 'agnes@example.org', 'maren@example.org'] } });
+    const optedIn = makers.filter((m) => m.thankYouMail).map((m) => m.email).sort();
+    expect(optedIn).toEqual(['agnes@example.org', 'ines@example.org']);
+    const before = new Map<string, number>();
+    for (const m of makers) before.set(m.email, (await mailTo(m.email)).length);
+    for (const stop of packed) {
+      const done = await coordinator.post(`/api/runs/${run.id}/stops/${stop.id}/delivered`, { receivedCount: stop.blankets.length, signedBy: 'Duty nurse Pell' });
+      expect(done.status, JSON.stringify(done.body)).toBe(200);
+    }
+    for (const m of makers) {
+      const fresh = (await mailTo(m.email)).slice(before.get(m.email));
+      expect(fresh.length, m.email).toBe(m.thankYouMail ? 1 : 0);
+      for (const mail of fresh) {
+        expect(mail.subject).toMatch(/delivered/);
+        expect(mail.text).not.toContain('Pell');
+      }
+    }
+  });
 });

@@ -112,3 +112,19 @@ test("a coordinator sets the drive's time zone from the list of zones", async ({
     expect(res.status()).toBe(200);
   }
 });
+
+test('a maker turns the day-before reminders off and on again on the drop-off page', async ({ page }) => {
+  await page.setViewportSize({ width: 1280, height: 900 });
+  await signIn(page, 'volunteer');
+  await page.goto('/drop-off');
+  const toggle = page.getByRole('checkbox', { name: 'E-mail me a reminder the day before each drop-off' });
+  await expect(toggle).toBeChecked();
+  await toggle.click();
+  await expect(toggle).not.toBeChecked();
+  await expect.poll(async () => (await (await page.request.get('/api/bookings/reminders')).json()).bookingReminders).toBe(false);
+  await page.reload();
+  await expect(toggle).not.toBeChecked();
+  await toggle.click();
+  await expect(toggle).toBeChecked();
+  await expect.poll(async () => (await (await page.request.get('/api/bookings/reminders')).json()).bookingReminders).toBe(true);
+});

@@ -13,6 +13,8 @@ import './drop-offs';
 import './assignments';
 // Delivery runs take the assigned, packed and delivered blankets the steps above made.
 import './delivery';
+// Makers who asked to be thanked when their blankets are delivered.
+import './thank-you';
 // Photos last: they picture the blankets the steps above made.
 import './photos';
 // A message the mail server refused, for the Mail page's list of what is not sent yet.

@@ -4,7 +4,9 @@ import type { RouteDef } from '../route-table';
 import type { Config } from '../../config/env';
 import type { MapTilesResponse } from '@shared/schemas/map';
 import { driveProgress } from './progress.service';
-import { driveGlance } from './glance.service';
+import { driveGlance, glanceWeeks } from './glance.service';
+import { validate } from '../../middleware/validate';
+import { GlanceWeeksQuerySchema, type GlanceWeeksQuery } from '@shared/schemas/glance';
 
 export function driveRoutes(config: Pick<Config, 'tiles'>): RouteDef[] {
   return [
@@ -31,6 +33,16 @@ export function driveRoutes(config: Pick<Config, 'tiles'>): RouteDef[] {
       handlers: [
         async (_req, res) => {
           res.json({ glance: await driveGlance() });
+        },
+      ],
+    },
+    {
+      method: 'get', path: '/api/drive/glance/weeks', access: ['organiser', 'coordinator'], summary: 'The drive at a glance week by week for one need: blankets pledged for it, and its blankets reaching each step',
+      handlers: [
+        validate({ query: GlanceWeeksQuerySchema }),
+        async (req, res) => {
+          const { needId } = req.query as unknown as GlanceWeeksQuery;
+          res.json({ weeks: await glanceWeeks(needId) });
         },
       ],
     },

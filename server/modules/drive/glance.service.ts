@@ -104,18 +104,26 @@ export async function driveGlance(): Promise<DriveGlance> {
   };
 }
 
-/** Per week: blankets pledged (on promises still standing) and distinct blankets that reached each step. */
-async function timeline(todayUtc: string): Promise<GlanceWeek[]> {
+/**
+ * Per week: blankets pledged (on promises still standing) and distinct blankets that reached each
+ * step. For one need: its pledges, and the blankets that count for it now (assigned to it, or else
+ * pledged for it), through their whole history.
+ */
+async function timeline(todayUtc: string, needId?: number): Promise<GlanceWeek[]> {
   const sequelize = Need.sequelize!;
+  const forNeed = needId === undefined ? '' : `AND e.blanketId IN (SELECT b.id FROM blankets b WHERE ${needOfBlanket('b.id', 'b.pledgeId')} = :needId)`;
   const reached = await sequelize.query<{ week: string; step: GlanceStep; n: number }>(
     `SELECT ${weekOfSql('e.createdAt')} AS week, m.step AS step, COUNT(DISTINCT e.blanketId) AS n
      FROM blanket_events e ${arrivalJoin('e')}
+     WHERE 1 = 1 ${forNeed}
      GROUP BY week, m.step`,
-    { type: QueryTypes.SELECT },
+    { type: QueryTypes.SELECT, replacements: { needId: needId ?? null } },
   );
   const pledged = await sequelize.query<{ week: string; n: number }>(
-    `SELECT ${weekOfSql('createdAt')} AS week, SUM(quantity) AS n FROM pledges WHERE status IN (${sqlList(PROMISING_PLEDGE_STATUSES)}) GROUP BY week`,
-    { type: QueryTypes.SELECT },
+    `SELECT ${weekOfSql('createdAt')} AS week, SUM(quantity) AS n FROM pledges
+     WHERE status IN (${sqlList(PROMISING_PLEDGE_STATUSES)}) ${needId === undefined ? '' : 'AND needId = :needId'}
+     GROUP BY week`,
+    { type: QueryTypes.SELECT, replacements: { needId: needId ?? null } },
   );
   const last = weekOf(todayUtc);
   const firsts = [...reached.map((r) => r.week), ...pledged.map((r) => r.week)].filter((w) => w <= last).sort();
@@ -132,6 +140,12 @@ async function timeline(todayUtc: string): Promise<GlanceWeek[]> {
     weeks.push(row);
   }
   return weeks;
+}
+
+/** GET /api/drive/glance/weeks: the week-by-week figures of one need. */
+export async function glanceWeeks(needId: number): Promise<GlanceWeek[]> {
+  const clock = await driveNow();
+  return timeline(new Date(clock.nowMs).toISOString().slice(0, 10), needId);
 }
 
 /**

@@ -1,4 +1,4 @@
-import { lazy, Suspense, type ReactNode } from 'react';
+import { lazy, Suspense, useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { AlarmClock, ArrowRight, CircleCheck, FileSpreadsheet, Hourglass, Truck } from 'lucide-react';
 import { PageHeader } from '@/components/ui/page-header';
@@ -8,7 +8,8 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { Loading } from '@/components/ui/spinner';
 import { QueryError } from '@/components/ui/query-error';
 import { formatDay, formatMoment } from '@/components/ui/format-day';
-import { useDriveGlance } from '@/features/drive/api/get-drive-glance';
+import { useDriveGlance, useGlanceWeeks } from '@/features/drive/api/get-drive-glance';
+import { Field, Select } from '@/components/ui/field';
 import { sizeLabel } from '@/features/blankets/components/labels';
 import { RunStateBadge } from '@/features/runs/components/run-state-badge';
 import { glanceLinks } from '@/features/progress/components/glance-links';
@@ -227,6 +228,11 @@ function PerNeed({ g }: { g: DriveGlance }) {
 }
 
 function OverTime({ g }: { g: DriveGlance }) {
+  const [needId, setNeedId] = useState<number | null>(null);
+  const forNeed = useGlanceWeeks(needId);
+  const need = g.needs.find((n) => n.needId === needId);
+  const weeks = needId === null ? g.weeks : forNeed.data;
+  const whose = need ? ` for ${needName(need)}` : '';
   return (
     <section aria-labelledby="time-heading">
       <Card className="min-w-0">
@@ -236,21 +242,35 @@ function OverTime({ g }: { g: DriveGlance }) {
         <p className="mb-3 max-w-prose text-ink-soft">
           Running totals from each blanket’s history: blankets pledged, and blankets that had reached each step by the end of each week (weeks start on Monday). The table below has the figures for each week, each one opening the blankets behind it.
         </p>
-        {g.weeks.length === 0 ? (
+        <Field label="Show the weeks of" className="mb-4 max-w-md">
+          {({ id }) => (
+            <Select id={id} value={needId ?? ''} onChange={(e) => setNeedId(e.target.value ? Number(e.target.value) : null)}>
+              <option value="">The whole drive</option>
+              {g.needs.map((n) => (
+                <option key={n.needId} value={n.needId}>
+                  {needName(n)}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        {weeks === undefined ? (
+          forNeed.error ? <QueryError error={forNeed.error} /> : <Loading label="Counting the weeks…" />
+        ) : weeks.length === 0 ? (
           <EmptyState icon={Hourglass} title="No history yet">
-            The weeks fill in as makers pledge and log blankets.
+            {need ? 'Nothing has been pledged or made for this need yet.' : 'The weeks fill in as makers pledge and log blankets.'}
           </EmptyState>
         ) : (
           <>
             <Suspense fallback={<Loading label="Drawing the chart…" />}>
-              <GlanceTimelineChart weeks={g.weeks} />
+              <GlanceTimelineChart weeks={weeks} />
             </Suspense>
             <details className="mt-4">
               <summary className="cursor-pointer text-lg font-bold text-heather-800">The figures week by week, as a table</summary>
               <div className="mt-3">
                 <Scroller label="Week by week, scrolls sideways">
                   <table className="w-full min-w-[44rem] text-left">
-                    <caption className="sr-only">Blankets pledged, and blankets that reached each step, each week</caption>
+                    <caption className="sr-only">Blankets pledged, and blankets that reached each step, each week{whose}</caption>
                     <thead className="bg-oat-50 text-sm">
                       <tr>
                         <th scope="col" className={th}>Week of</th>
@@ -261,13 +281,17 @@ function OverTime({ g }: { g: DriveGlance }) {
                       </tr>
                     </thead>
                     <tbody>
-                      {[...g.weeks].reverse().map((w) => (
+                      {[...weeks].reverse().map((w) => (
                         <tr key={w.week} className="border-t border-oat-200">
                           <th scope="row" className={`${th} whitespace-nowrap`}>{formatDay(w.week)}</th>
                           <td className={td}>{w.pledged}</td>
                           {GLANCE_STEPS.map((s) => (
                             <td key={s} className={td}>
-                              <Figure n={w.reached[s]} to={glanceLinks.reached(s, w.week)} label={`${w.reached[s]} ${STEP_LABELS[s].toLowerCase()} in the week of ${formatDay(w.week)}`} />
+                              <Figure
+                                n={w.reached[s]}
+                                to={glanceLinks.reached(s, w.week, needId ?? undefined)}
+                                label={`${w.reached[s]} ${STEP_LABELS[s].toLowerCase()} in the week of ${formatDay(w.week)}${whose}`}
+                              />
                             </td>
                           ))}
                         </tr>

@@ -18,7 +18,7 @@ import { TOWN_CENTRE } from '@/features/sites/components/site-form';
 import { useSoonest } from '@/features/drop-off/api/get-soonest';
 import { useMyBookings } from '@/features/drop-off/api/get-bookings';
 import { useFinishedBlankets } from '@/features/drop-off/api/get-finished-blankets';
-import { useDriveClock } from '@/lib/drive-clock';
+import { useDriveClock, useDriveToday } from '@/lib/drive-clock';
 import { useReminders, useSetReminders } from '@/features/drop-off/api/reminders';
 import { useSetThankYouMail, useThankYouMail } from '@/features/drop-off/api/thank-you-mail';
 import { useCancelBooking, useCreateBooking, useMoveBooking } from '@/features/drop-off/api/book';
@@ -36,7 +36,7 @@ export default function DropOffPage() {
   const preselected = Number(params.get('blanket')) || null;
   const clock = useDriveClock();
   const zone = clock.data?.timeZone ?? 'UTC';
-  const today = clock.data?.today ?? new Date().toISOString().slice(0, 10);
+  const today = useDriveToday();
   const mine = useMyBookings();
   const finished = useFinishedBlankets();
   const sites = useSites('true');
@@ -276,9 +276,10 @@ function ReminderToggle() {
   const reminders = useReminders();
   const set = useSetReminders();
   if (!reminders.data) return null;
-  const on = reminders.data.bookingReminders;
+  // The box shows the choice at once; it falls back to the saved answer if saving fails.
+  const on = set.isPending && set.variables !== undefined ? set.variables : reminders.data.bookingReminders;
   return (
-    <div className="flex items-start gap-3 rounded-xl bg-oat-100 p-3">
+    <div className="flex flex-wrap items-start gap-3 rounded-xl bg-oat-100 p-3">
       {on ? <BellRing className="mt-1.5 size-5 shrink-0 text-heather-700" aria-hidden /> : <BellOff className="mt-1.5 size-5 shrink-0 text-ink-soft" aria-hidden />}
       <Checkbox
         label="E-mail me a reminder the day before each drop-off"
@@ -286,6 +287,7 @@ function ReminderToggle() {
         disabled={set.isPending}
         onChange={(e) => set.mutate(e.target.checked)}
       />
+      {set.error && <p role="alert" className="w-full font-bold text-brick-700">Your reminder choice was not saved: {set.error.message}</p>}
     </div>
   );
 }
