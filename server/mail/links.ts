@@ -9,4 +9,6 @@ export const appLinks = {
   /** A blanket's own page: its maker sees there what to fix, and can print its tag. */
   blanket: (appUrl: string, blanketId: number) => `${appUrl}/blankets/${blanketId}`,
   myBlankets: (appUrl: string) => `${appUrl}/blankets`,
+  /** The maker's drop-off page: their bookings, and booking another time. */
+  dropOff: (appUrl: string) => `${appUrl}/drop-off`,
 };

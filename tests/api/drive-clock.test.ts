@@ -4,6 +4,7 @@ import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
 import { Blanket } from '../../server/db/models/blanket';
 import { BlanketEvent } from '../../server/db/models/blanket-event';
 import { Booking } from '../../server/db/models/booking';
+import { MailMessage } from '../../server/db/models/mail-message';
 import { Recipient } from '../../server/db/models/recipient';
 import { Site } from '../../server/db/models/site';
 import { User } from '../../server/db/models/user';
@@ -230,6 +231,11 @@ describe('marking a visit "did not come"', () => {
       const event = await BlanketEvent.findOne({ where: { blanketId: b.id }, order: [['id', 'DESC']] });
       expect(event).toMatchObject({ kind: 'booking', fromStatus: 'booked', toStatus: 'finished', reason: 'Did not come to the drop-off' });
     }
+    // The maker hears, once, that the blankets are free to book again.
+    const notices = await MailMessage.findAll({ where: { to: 'volunteer@example.org', subject: 'We missed you at Clock desk' } });
+    expect(notices).toHaveLength(1);
+    expect(notices[0].text).toContain(blankets.map((b) => b.code).sort().join(', '));
+    expect(notices[0].text).toContain(`${t.config.publicUrl}/drop-off\n`);
     // The day view names who did not come; the maker can no longer move or cancel it, but can book again.
     const dayView = (await organiser.get(`/api/bookings?siteId=${desk.id}&day=${target}`)).body.bookings as BookingView[];
     expect(dayView.find((b) => b.id === visit.id)).toMatchObject({ arrival: 'missed', maker: { name: maker.name } });

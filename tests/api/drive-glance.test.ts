@@ -110,6 +110,26 @@ describe('the drive at a glance agrees with a recount of the demo drive', () => 
     expect(any).toBeGreaterThan(10);
   });
 
+  it('the demo drive was promised over weeks, each pledge before its first blanket was logged', async () => {
+    const { pledges } = await recount();
+    const firstLogged = new Map<number, number>();
+    const logged = await BlanketEvent.findAll({ where: { kind: 'logged' }, attributes: ['blanketId', 'createdAt'], raw: true });
+    const pledgeOf = new Map((await Blanket.findAll({ attributes: ['id', 'pledgeId'], raw: true })).map((b) => [b.id, b.pledgeId]));
+    for (const e of logged) {
+      const p = pledgeOf.get(e.blanketId);
+      if (p == null) continue;
+      const t = new Date(e.createdAt).getTime();
+      firstLogged.set(p, Math.min(firstLogged.get(p) ?? Infinity, t));
+    }
+    expect(firstLogged.size).toBeGreaterThan(10);
+    for (const p of pledges) {
+      const first = firstLogged.get(p.id);
+      if (first !== undefined) expect(new Date(p.createdAt).getTime(), `pledge ${p.id}`).toBeLessThan(first);
+    }
+    // More than one week holds new pledges, so the week-by-week chart does not start the drive today.
+    expect(glance.weeks.filter((w) => w.pledged > 0).length).toBeGreaterThan(2);
+  });
+
   it('week by week for one need: its pledges, and the blankets that count for it', async () => {
     const { blankets, pledges, events, needOf } = await recount();
     const need = [...glance.needs].sort((a, b) => GLANCE_STEPS.reduce((s, x) => s + b.now[x] - a.now[x], 0))[0]!;
@@ -226,4 +246,22 @@ it('every status on the way to delivery belongs to exactly one step', () => {
   expect(new Set(all).size).toBe(all.length);
   expect(stepOf('in_progress')).toBeNull();
   expect(stepOf('declined')).toBeNull();
+});
+
+describe('a drive with nothing in it yet', () => {
+  it('counts zeros, no weeks and nothing waiting, without an error', async () => {
+    const empty = await makeTestApp({ seed: false });
+    try {
+      const { driveGlance } = await import('../../server/modules/drive/glance.service');
+      const g = await driveGlance();
+      expect(g.needs).toEqual([]);
+      expect(g.weeks).toEqual([]);
+      for (const s of GLANCE_STEPS) expect(g.totals[s]).toBe(0);
+      expect(g.waiting.every((w) => w.count === 0 && w.longest.length === 0)).toBe(true);
+      expect(g.upcomingRuns.total).toBe(0);
+      expect(g.recentExports.total).toBe(0);
+    } finally {
+      await empty.close();
+    }
+  });
 });

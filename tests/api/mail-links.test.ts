@@ -55,7 +55,7 @@ const SAMPLES: Record<string, () => { subject: string; text: string }> = {
 describe('links in mail', () => {
   it('every link builder lands on a page of the client', () => {
     const routes = clientRoutes();
-    const built = [appLinks.home(APP), appLinks.resetPassword(APP, 'x'), appLinks.blanket(APP, 3), appLinks.myBlankets(APP)];
+    const built = [appLinks.home(APP), appLinks.resetPassword(APP, 'x'), appLinks.blanket(APP, 3), appLinks.myBlankets(APP), appLinks.dropOff(APP)];
     expect(Object.keys(appLinks)).toHaveLength(built.length);
     for (const url of built) expect(isClientPage(url, routes), url).toBe(true);
     // The check itself: the old needs-fix link is not a page.

@@ -2,9 +2,9 @@ import { expect, test, type Page } from '@playwright/test';
 import { E2E_PASSWORD, shot, signIn, signOut } from './helpers';
 
 const navFor = {
-  volunteer: { has: ['Home', 'Planner'], lacks: ['People', 'Mail'] },
-  organiser: { has: ['Home', 'Planner'], lacks: ['People', 'Mail'] },
-  coordinator: { has: ['Home', 'Planner', 'People', 'Mail'], lacks: [] as string[] },
+  volunteer: { has: ['Home', 'Planner'], lacks: ['People', 'Mail', 'At a glance'] },
+  organiser: { has: ['Home', 'Planner', 'At a glance'], lacks: ['People', 'Mail'] },
+  coordinator: { has: ['Home', 'Planner', 'At a glance', 'People', 'Mail'], lacks: [] as string[] },
 } as const;
 
 test('the public home page explains the drive', async ({ page }) => {

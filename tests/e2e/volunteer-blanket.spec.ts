@@ -175,6 +175,8 @@ test('the maker corrects the log of a blanket still on the hook, and the self-ch
   await signIn(page, 'volunteer');
   await page.goto('/blankets');
   await page.getByRole('combobox', { name: 'Status' }).selectOption('in_progress');
+  // The filtered list replaces the whole one when it arrives; open a row only from it.
+  await expect(page.getByTestId('blanket-row').filter({ hasNotText: 'In progress' })).toHaveCount(0);
   await page.getByTestId('blanket-row').first().getByRole('link').click();
   // The demo blanket on the hook is in worsted, heavier than the newborn unit takes.
   await expect(page.getByTestId('self-check-problems')).toContainText('yarn weight 4');

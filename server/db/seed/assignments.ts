@@ -102,6 +102,8 @@ async function addWaitingBlankets(ctx: SeedContext) {
         { transaction },
       );
       const loggedAt = daysFrom(today, -(14 + (k % 9)));
+      // Promised a few weeks before it was logged (Sequelize stamps createdAt with now).
+      await Pledge.update({ createdAt: daysFrom(loggedAt, -(7 + (k % 14))) }, { where: { id: pledge.id }, transaction, silent: true });
       const at = (step: number) => new Date(loggedAt.getTime() + step * 86_400_000);
       // Handmade sizes wander a centimetre or two from one blanket to the next.
       const jitter = ((k * 7) % 5) - 2;

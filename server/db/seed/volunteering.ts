@@ -258,6 +258,11 @@ addSeedStep(async (ctx) => {
       { transaction },
     );
     pledgeIds.push(pledge.id);
+    // A promise comes before its blankets: a week before the first one was logged, or a few weeks
+    // ago for a pledge with nothing logged yet (Sequelize stamps createdAt with now).
+    const firstLogged = Math.max(0, ...plan.blankets.map((b) => b.loggedDaysAgo));
+    const pledgedAt = daysFrom(today, -(firstLogged > 0 ? firstLogged + 7 : 10 + (pledgeIds.length % 15)));
+    await Pledge.update({ createdAt: pledgedAt }, { where: { id: pledge.id }, transaction, silent: true });
 
     for (const b of plan.blankets) {
       const steps = pathTo(b.status);

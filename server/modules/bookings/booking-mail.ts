@@ -81,3 +81,16 @@ export function bookingReminderMail(f: BookingMailFacts) {
     ]),
   };
 }
+
+/** After an organiser marks the visit "did not come": no blame, the blankets are free to book again. */
+export function bookingMissedMail(f: BookingMailFacts) {
+  return {
+    subject: `We missed you at ${f.siteName}`,
+    text: body(f, ['We did not see you at your drop-off:'], [
+      `Your ${f.blanketCodes.length === 1 ? 'blanket is' : 'blankets are'} marked finished again (${f.blanketCodes.join(', ')}), so you can book another time whenever it suits you:`,
+      f.appUrl,
+      '',
+      'If you did come and we missed you, reply to this message and an organiser will put it right.',
+    ]),
+  };
+}

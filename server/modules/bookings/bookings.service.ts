@@ -15,8 +15,9 @@ import { addDays, dayIn, isoIn } from '@shared/scheduling/slots';
 import { driveZone } from './drive-clock';
 import { bookedCounts, nextFree, slotAt } from './slots.service';
 import { calendarAttachment, parseMailbox } from './invitation';
-import { bookingCancelledMail, bookingConfirmedMail, bookingMovedMail, whenText, type BookingMailFacts } from './booking-mail';
+import { bookingCancelledMail, bookingConfirmedMail, bookingMissedMail, bookingMovedMail, whenText, type BookingMailFacts } from './booking-mail';
 import { nowMs } from '../../lib/clock';
+import { appLinks } from '../../mail/links';
 
 export interface BookingContext {
   sequelize: Sequelize;
@@ -130,7 +131,7 @@ function facts(ctx: BookingContext, b: { startsAt: Date; endsAt: Date }, site: S
     endsAt: b.endsAt,
     timeZone: zone,
     blanketCodes: codes,
-    appUrl: `${ctx.publicUrl}/volunteer/drop-off`,
+    appUrl: appLinks.dropOff(ctx.publicUrl),
   };
 }
 
@@ -158,7 +159,7 @@ function invitationMail(
     maker: { name: maker.name, email: maker.email },
     organiser: parseMailbox(ctx.mailFrom),
     host: new URL(ctx.publicUrl).hostname,
-    appUrl: `${ctx.publicUrl}/volunteer/drop-off`,
+    appUrl: appLinks.dropOff(ctx.publicUrl),
   });
   return { to: maker.email, subject: message.subject, text: message.text, attachments: [attachment] };
 }
@@ -340,6 +341,8 @@ export async function markMissed(ctx: BookingContext, actor: Actor, id: number):
     }
     b.set({ status: 'missed', missedAt: new Date(now), missedById: actor.id, reminderDoneAt: b.reminderDoneAt ?? new Date(now) });
     await b.save({ transaction });
+    const codes = carried.map((x) => x.code).sort();
+    await enqueueMail({ to: b.maker.email, ...bookingMissedMail(facts(ctx, b, b.site, b.maker, codes, zone)) }, transaction);
   });
   return getBooking(actor, id, now);
 }

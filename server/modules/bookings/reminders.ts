@@ -7,6 +7,7 @@ import { enqueueMail } from '../../mail/outbox';
 import { bookingReminderMail } from './booking-mail';
 import { driveZone } from './drive-clock';
 import { now as clockNow } from '../../lib/clock';
+import { appLinks } from '../../mail/links';
 
 export interface ReminderContext {
   sequelize: Sequelize;
@@ -57,7 +58,7 @@ export async function sendDueReminders(ctx: ReminderContext, now: Date = clockNo
         endsAt: b.endsAt,
         timeZone: zone,
         blanketCodes: codes,
-        appUrl: `${ctx.publicUrl}/volunteer/drop-off`,
+        appUrl: appLinks.dropOff(ctx.publicUrl),
       });
       await enqueueMail({ to: b.maker.email, ...mail }, transaction);
       sent++;

@@ -20,8 +20,9 @@ function zoneGroups(current: string | undefined): Array<[string, string[]]> {
   return [...groups.entries()];
 }
 
-const nowIn = (zone: string) =>
-  new Intl.DateTimeFormat('en-GB', { timeZone: zone, weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' }).format(new Date());
+/** The drive clock's moment (the server's answer) as the wall clock of a zone. */
+const nowIn = (zone: string, at: string | undefined) =>
+  new Intl.DateTimeFormat('en-GB', { timeZone: zone, weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' }).format(at ? new Date(at) : new Date());
 
 /**
  * The coordinator sets the drive's clock: opening hours, slots, reminders and every "today" in
@@ -53,7 +54,7 @@ export function DriveZoneForm() {
           if (value) save.mutate(value, { onSuccess: () => setChosen(null) });
         }}
       >
-        <Field label="Time zone" className="min-w-64 flex-1" error={fieldError} hint={value ? `Now there: ${nowIn(value)}` : undefined}>
+        <Field label="Time zone" className="min-w-64 flex-1" error={fieldError} hint={value ? `Now there: ${nowIn(value, clock.data?.now)}` : undefined}>
           {({ id, describedBy, invalid }) => (
             <Select id={id} value={value} aria-describedby={describedBy} aria-invalid={invalid} onChange={(e) => setChosen(e.target.value)}>
               {groups.map(([region, zones]) => (
