@@ -14,31 +14,40 @@ const CHANGES_SCHEMA = /^\s*(CREATE|ALTER|DROP)\b/i;
 
 class CachingDatabase extends sqlite3.Database {
   private columnInfo = new Map<string, unknown[]>();
-  private statements = new Map<string, sqlite3.Statement>();
+  private statements = new Map<string, Promise<sqlite3.Statement>>();
 
   /**
    * Runs a read through a statement prepared once per connection and kept. The per-request lookups
-   * (the session row, the signed-in user) go through here: Sequelize's own path costs about a
-   * millisecond of CPU per query in building the SQL, capturing a stack and making instances.
-   * `all` steps the statement to its end, so it holds no read transaction between calls.
+   * (the session row, the signed-in user, the drive's zone) go through here: Sequelize's own path
+   * costs about a millisecond of CPU per query in building the SQL, capturing a stack and making
+   * instances. `all` steps the statement to its end, so it holds no read transaction between calls.
    */
-  cachedAll<T>(sql: string, params: unknown[]): Promise<T[]> {
-    let statement = this.statements.get(sql);
-    if (!statement) {
-      statement = this.prepare(sql);
-      this.statements.set(sql, statement);
+  async cachedAll<T>(sql: string, params: unknown[]): Promise<T[]> {
+    let ready = this.statements.get(sql);
+    if (!ready) {
+      const preparing = new Promise<sqlite3.Statement>((resolve, reject) => {
+        const statement: sqlite3.Statement = this.prepare(sql, (err: Error | null) => (err ? reject(err) : resolve(statement)));
+      });
+      // A statement that could not be prepared (a table not there yet, say) is tried afresh next time.
+      preparing.catch(() => {
+        if (this.statements.get(sql) === preparing) this.statements.delete(sql);
+      });
+      this.statements.set(sql, preparing);
+      ready = preparing;
     }
-    const s = statement;
-    return new Promise((resolve, reject) => s.all(params, (err: Error | null, rows: T[]) => (err ? reject(err) : resolve(rows))));
+    const statement = await ready;
+    return new Promise((resolve, reject) => statement.all(params, (err: Error | null, rows: T[]) => (err ? reject(err) : resolve(rows))));
   }
 
   /** SQLite refuses to close a connection that still has prepared statements; finalise ours first. */
   override close(callback?: (err: Error | null) => void): void {
-    const open = [...this.statements.values()];
+    const pending = [...this.statements.values()];
     this.statements.clear();
-    let left = open.length;
-    if (left === 0) return super.close(callback);
-    for (const s of open) s.finalize(() => (--left === 0 ? super.close(callback) : undefined));
+    if (pending.length === 0) return super.close(callback);
+    void Promise.allSettled(pending).then(async (settled) => {
+      for (const s of settled) if (s.status === 'fulfilled') await new Promise<void>((r) => s.value.finalize(() => r()));
+      super.close(callback);
+    });
   }
 
   private forgetIfSchemaChanges(sql: unknown) {
