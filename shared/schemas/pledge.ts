@@ -61,10 +61,26 @@ export const PledgeListQuerySchema = PageQuerySchema.extend({
   mine: flag.optional(),
   status: PledgeStatusSchema.optional(),
   needId: z.coerce.number().int().positive().optional(),
+  /** Only the pledges whose blankets are promised (active or fulfilled): the ones the pledged figures add up. */
+  promising: flag.optional(),
+  /** Made on a day from `from` up to, not including, `to` (UTC); both or neither. */
+  from: IsoDaySchema.optional(),
+  to: IsoDaySchema.optional(),
   sort: z.enum(PLEDGE_SORTS, { error: `sort is one of ${PLEDGE_SORTS.join(', ')}` }).default('dueDate'),
   q: SearchSchema,
-});
+})
+  .refine((v) => (v.from === undefined) === (v.to === undefined), { message: 'from and to go together', path: ['from'] })
+  .refine((v) => v.from === undefined || v.to === undefined || v.from < v.to, { message: 'to must be after from', path: ['to'] });
 export type PledgeListQuery = z.infer<typeof PledgeListQuerySchema>;
+
+/** GET /api/pledges: one page, and how many blankets all the pledges that match promise between them. */
+export interface PledgePage {
+  items: PledgeView[];
+  total: number;
+  page: number;
+  pageSize: number;
+  blankets: number;
+}
 
 /** A pledge as the API returns it. */
 export interface PledgeView {

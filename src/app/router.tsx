@@ -54,6 +54,7 @@ export const routes = [
   { path: 'organiser/drop-offs', ...guarded(() => import('./routes/organiser/drop-off-day'), ['organiser', 'coordinator']) },
   { path: 'blankets/:id/edit', ...guarded(() => import('./routes/volunteer/edit-blanket')) },
   { path: 'all-blankets', ...guarded(() => import('./routes/organiser/all-blankets'), ['organiser', 'coordinator']) },
+  { path: 'all-pledges', ...guarded(() => import('./routes/organiser/all-pledges'), ['organiser', 'coordinator']) },
   { path: 'runs', ...guarded(() => import('./routes/delivery/runs'), ['organiser', 'coordinator']) },
   { path: 'runs/:id', ...guarded(() => import('./routes/delivery/run-detail'), ['organiser', 'coordinator']) },
   { path: 'runs/:id/packing-sheet', ...guarded(() => import('./routes/delivery/packing-sheet'), ['organiser', 'coordinator']) },

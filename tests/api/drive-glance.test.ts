@@ -222,6 +222,19 @@ describe('each figure links to a list that holds as many blankets', () => {
     expect(checked).toBeGreaterThan(5);
   });
 
+  it('pledged per need and per week: the pledges still standing add up to the figure', async () => {
+    const pledged = async (query: string) => {
+      const res = await coordinator.get(`/api/pledges?promising=true&${query}`);
+      expect(res.status, JSON.stringify(res.body)).toBe(200);
+      return res.body.blankets as number;
+    };
+    for (const n of glance.needs) expect(await pledged(`needId=${n.needId}`), `need ${n.needId}`).toBe(n.pledged);
+    const weeks = glance.weeks.filter((w) => w.pledged > 0);
+    expect(weeks.length).toBeGreaterThan(0);
+    for (const w of weeks) expect(await pledged(`from=${w.week}&to=${weekAfter(w.week)}`), w.week).toBe(w.pledged);
+    expect((await coordinator.get('/api/pledges?from=2026-11-02')).status).toBe(400);
+  });
+
   it('refuses half a filter with the field named (400), never a server error', async () => {
     const half = await coordinator.get('/api/blankets?reached=received&from=2026-11-02');
     expect(half.status).toBe(400);

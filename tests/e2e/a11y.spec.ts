@@ -21,7 +21,7 @@ const publicPages = ['/', '/sign-in', '/register', '/forgot-password', '/planner
 const signedInPages: Record<Who, string[]> = {
   volunteer: ['/home', '/needs', '/pledges', '/blankets', '/blankets/new', '/drop-off'],
   organiser: ['/home', '/organiser/intake', '/organiser/queue', '/organiser/drop-offs', '/all-blankets', '/recipients'],
-  coordinator: ['/sites', '/people', '/mail', '/drive'],
+  coordinator: ['/sites', '/people', '/mail', '/drive', '/all-pledges?promising=true'],
 };
 
 for (const path of publicPages) {

@@ -34,6 +34,14 @@ test('a coordinator opens the drive at a glance and follows a figure to the list
   await expect(page.getByTestId('list-filter')).toContainText(label.replace(/^\d+ checked for /, ''));
   await expect(page.getByText(`${n} matching blanket${n === 1 ? '' : 's'}`)).toBeVisible();
 
+  // A need's pledged figure opens its pledges still standing, promising as many blankets.
+  await page.getByRole('link', { name: 'Back to the drive at a glance' }).click();
+  const pledgedCell = page.getByRole('link', { name: /^\d+ pledged for / }).first();
+  const pledgedN = Number((await pledgedCell.getAttribute('aria-label'))!.split(' ')[0]);
+  await pledgedCell.click();
+  await expect(page).toHaveURL(/\/all-pledges\?promising=true&needId=\d+$/);
+  await expect(page.getByTestId('pledge-total')).toContainText(`promising ${pledgedN} blanket`);
+
   // Week by week for one need: a week's figure opens the blankets of that need that reached the step that week.
   await page.getByRole('link', { name: 'Back to the drive at a glance' }).click();
   const whose = page.getByLabel('Show the weeks of');
@@ -41,7 +49,7 @@ test('a coordinator opens the drive at a glance and follows a figure to the list
   const needLabel = (await whose.locator('option:checked').textContent())!;
   await page.getByText('The figures week by week, as a table').click();
   await expect(page.getByRole('table', { name: `Blankets pledged, and blankets that reached each step, each week for ${needLabel}` })).toBeVisible();
-  const week = page.getByRole('link', { name: new RegExp(` in the week of .* for ${needLabel.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`) }).first();
+  const week = page.getByRole('link', { name: new RegExp(`^\\d+ (finished|received|checked|assigned|packed|delivered) in the week of .* for ${needLabel.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`) }).first();
   const weekN = Number((await week.getAttribute('aria-label'))!.split(' ')[0]);
   await week.click();
   await expect(page).toHaveURL(/\/all-blankets\?reached=\w+&from=[\d-]+&to=[\d-]+&needId=\d+$/);

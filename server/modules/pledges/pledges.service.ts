@@ -12,6 +12,7 @@ import {
   type PledgeListQuery,
   type PledgeSort,
   type PledgeUpdate,
+  type PledgePage,
   type PledgeView,
 } from '@shared/schemas/pledge';
 import type { SizeCategory } from '@shared/schemas/blanket';
@@ -19,7 +20,7 @@ import { recipientBrief, addDaysIso, type BriefSource } from './recipient-brief'
 import { findAllPlain } from '../../db/plain-rows';
 import { driveToday } from '../bookings/drive-clock';
 import { addToTally, emptyTally, isPledgeLate, pledgeStatusFor, type PledgeTally } from '@shared/pledges/rules';
-import type { Page } from '@shared/schemas/page';
+import { PROMISING_PLEDGE_STATUSES } from './need-counts';
 
 /** Kept here for callers written before the actor had its own home in server/auth/actor.ts. */
 export type { Actor } from '../../auth/actor';
@@ -113,16 +114,26 @@ function pledgeOrder(sort: PledgeSort, dir: 'ASC' | 'DESC'): Order {
 }
 
 /** One page of pledges: your own, or everyone's for staff; filtered, searched and sorted here. */
-export async function listPledges(actor: Actor, q: PledgeListQuery): Promise<Page<PledgeView>> {
+export async function listPledges(actor: Actor, q: PledgeListQuery): Promise<PledgePage> {
   const where: WhereOptions = {};
   if (!readsAll(actor) || q.mine) where.userId = actor.id;
   if (q.status) where.status = q.status;
   if (q.needId) where.needId = q.needId;
-  if (q.q) {
-    (where as Record<symbol, unknown>)[Op.and] = [sqlWhere(fn('instr', fn('lower', col('user.name')), q.q.toLowerCase()), Op.gt, 0)];
+  const and: unknown[] = [];
+  if (q.q) and.push(sqlWhere(fn('instr', fn('lower', col('user.name')), q.q.toLowerCase()), Op.gt, 0));
+  // The filters behind the pledged figures of the drive at a glance.
+  if (q.promising) and.push({ status: { [Op.in]: [...PROMISING_PLEDGE_STATUSES] } });
+  if (q.from && q.to) {
+    // Times are kept in UTC as text beginning YYYY-MM-DD: the day is its first ten characters.
+    const day = fn('substr', col('Pledge.createdAt'), 1, 10);
+    and.push(sqlWhere(day, Op.gte, q.from), sqlWhere(day, Op.lt, q.to));
   }
+  if (and.length) (where as Record<symbol, unknown>)[Op.and] = and;
   const dir = (q.dir ?? (q.sort === 'createdAt' ? 'desc' : 'asc')).toUpperCase() as 'ASC' | 'DESC';
-  const total = await Pledge.count({ where, include: q.q ? [{ model: User, as: 'user', attributes: [] }] : [] });
+  const countInclude = q.q ? [{ model: User, as: 'user', attributes: [] }] : [];
+  const total = await Pledge.count({ where, include: countInclude });
+  const [sum] = (await Pledge.findAll({ attributes: [[fn('SUM', col('Pledge.quantity')), 'n']], where, include: countInclude, raw: true })) as unknown as Array<{ n: number | null }>;
+  const blankets = Number(sum?.n ?? 0);
   // A page of a list is read as plain values: building model instances was most of what it cost.
   const pledges = await findAllPlain<PledgeRow>(Pledge, {
     where,
@@ -131,7 +142,7 @@ export async function listPledges(actor: Actor, q: PledgeListQuery): Promise<Pag
     limit: q.pageSize,
     offset: (q.page - 1) * q.pageSize,
   });
-  return { items: await views(pledges), total, page: q.page, pageSize: q.pageSize };
+  return { items: await views(pledges), total, page: q.page, pageSize: q.pageSize, blankets };
 }
 
 /** The pledge if this person may see it; someone else's is "not found" to a volunteer, never "forbidden". */

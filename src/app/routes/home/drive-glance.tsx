@@ -164,7 +164,7 @@ function PerNeed({ g }: { g: DriveGlance }) {
                     <div className="rounded-lg bg-oat-50 py-1">
                       <dt className="text-sm text-ink-soft">Pledged</dt>
                       <dd className="text-lg tabular-nums">
-                        <Figure n={n.pledged} to={glanceLinks.recipient(n.recipientId)} label={`${n.pledged} pledged for ${needName(n)}`} />
+                        <Figure n={n.pledged} to={glanceLinks.pledged(n.needId)} label={`${n.pledged} pledged for ${needName(n)}`} />
                       </dd>
                     </div>
                     {GLANCE_STEPS.map((s) => (
@@ -208,7 +208,7 @@ function PerNeed({ g }: { g: DriveGlance }) {
                     </td>
                     <td className={td}>{n.wanted}</td>
                     <td className={td}>
-                      <Figure n={n.pledged} to={glanceLinks.recipient(n.recipientId)} label={`${n.pledged} pledged for ${needName(n)}`} />
+                      <Figure n={n.pledged} to={glanceLinks.pledged(n.needId)} label={`${n.pledged} pledged for ${needName(n)}`} />
                     </td>
                     {GLANCE_STEPS.map((s) => (
                       <td key={s} className={td}>
@@ -284,7 +284,9 @@ function OverTime({ g }: { g: DriveGlance }) {
                       {[...weeks].reverse().map((w) => (
                         <tr key={w.week} className="border-t border-oat-200">
                           <th scope="row" className={`${th} whitespace-nowrap`}>{formatDay(w.week)}</th>
-                          <td className={td}>{w.pledged}</td>
+                          <td className={td}>
+                            <Figure n={w.pledged} to={glanceLinks.pledged(needId ?? undefined, w.week)} label={`${w.pledged} pledged in the week of ${formatDay(w.week)}${whose}`} />
+                          </td>
                           {GLANCE_STEPS.map((s) => (
                             <td key={s} className={td}>
                               <Figure

@@ -1,12 +1,17 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api, qs } from '@/lib/api-client';
-import type { PledgeSort, PledgeStatus, PledgeView } from '@shared/schemas/pledge';
-import { MAX_PAGE_SIZE, type Page } from '@shared/schemas/page';
+import type { PledgePage, PledgeSort, PledgeStatus } from '@shared/schemas/pledge';
+import { MAX_PAGE_SIZE } from '@shared/schemas/page';
 import { pledgeKeys } from './keys';
 
 export interface PledgeListParams {
   mine?: boolean;
   status?: PledgeStatus;
+  /** The filters behind the pledged figures of the drive at a glance. */
+  needId?: number;
+  promising?: boolean;
+  from?: string;
+  to?: string;
   q?: string;
   sort?: PledgeSort;
   dir?: 'asc' | 'desc';
@@ -14,7 +19,7 @@ export interface PledgeListParams {
   pageSize?: number;
 }
 
-export const getPledges = (p: PledgeListParams) => api.get<Page<PledgeView>>(`/api/pledges${qs({ ...p })}`);
+export const getPledges = (p: PledgeListParams) => api.get<PledgePage>(`/api/pledges${qs({ ...p })}`);
 
 export const pledgesQueryOptions = (p: PledgeListParams) =>
   queryOptions({ queryKey: pledgeKeys.list(p), queryFn: () => getPledges(p), placeholderData: keepPreviousData });
@@ -32,4 +37,9 @@ export const myPledgesQueryOptions = () =>
 
 export function useMyPledges() {
   return useQuery(myPledgesQueryOptions());
+}
+
+/** One page of everyone's pledges, for staff, with the filters the page holds. */
+export function usePledges(p: PledgeListParams) {
+  return useQuery(pledgesQueryOptions(p));
 }
