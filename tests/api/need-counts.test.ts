@@ -111,6 +111,24 @@ describe('one count per need, the same on every page', () => {
     expect(progress.statuses.reduce((n, s) => n + s.count, 0)).toBe(all.body.total);
   });
 
+  it("moves the chart's blankets per status as soon as a blanket is logged, though the figure is kept between writes", async () => {
+    const before = ((await organiser.get('/api/drive/progress')).body.progress as DriveProgress).statuses;
+    // Asked again with nothing written: the same answer.
+    expect(((await organiser.get('/api/drive/progress')).body.progress as DriveProgress).statuses).toEqual(before);
+    const needs = (await Need.findAll({ include: [{ model: Recipient, as: 'recipient' }] })) as Array<Need & { recipient: Recipient }>;
+    const n = needs.find((x) => x.recipient.kind === 'neonatal-unit' && x.sizeCategory === 'preemie')!;
+    const p = await vol.post('/api/pledges', { needId: n.id, quantity: 1, sizeCategory: 'preemie', dueDate: n.deadline });
+    expect(p.status).toBe(201);
+    const b = await vol.post('/api/blankets', {
+      pledgeId: p.body.pledge.id, widthCm: 45, lengthCm: 48, yarnWeight: 3, fibres: ['acrylic'], machineWashable: true, dryerSafe: true, smokeFree: true, petFree: true,
+    });
+    expect(b.status).toBe(201);
+    const status = b.body.blanket.status as string;
+    const after = ((await organiser.get('/api/drive/progress')).body.progress as DriveProgress).statuses;
+    const count = (xs: typeof before) => xs.find((x) => x.status === status)?.count ?? 0;
+    expect(count(after)).toBe(count(before) + 1);
+  });
+
   it("counts the children's ward's completed pledge on its recipient page as on What's needed", async () => {
     const ward = (await Recipient.findOne({ where: { kind: 'childrens-ward' } }))!;
     const need = (await Need.findOne({ where: { recipientId: ward.id, sizeCategory: 'child' } }))!;

@@ -4,7 +4,7 @@ import { Need } from '../../db/models/need';
 import { Recipient } from '../../db/models/recipient';
 import type { BlanketStatus } from '@shared/schemas/blanket';
 import type { DriveProgress } from '@shared/schemas/pledge';
-import { needCounts } from '../pledges/need-counts';
+import { keptUntilWrite, needCounts } from '../pledges/need-counts';
 import { driveToday } from '../bookings/drive-clock';
 
 /**
@@ -31,11 +31,16 @@ export async function driveProgress(): Promise<DriveProgress> {
     row.assigned += c.assigned;
     rows.set(n.recipientId, row);
   }
-  const byStatus = (await Blanket.findAll({
-    attributes: ['status', [fn('COUNT', col('id')), 'count']],
-    group: ['status'],
-    raw: true,
-  })) as unknown as Array<{ status: BlanketStatus; count: number }>;
+  // Walks every blanket of the drive; kept until a blanket (or pledge, or need) is written.
+  const byStatus = await keptUntilWrite(
+    'blankets-by-status',
+    async () =>
+      (await Blanket.findAll({
+        attributes: ['status', [fn('COUNT', col('id')), 'count']],
+        group: ['status'],
+        raw: true,
+      })) as unknown as Array<{ status: BlanketStatus; count: number }>,
+  );
   return {
     recipients: [...rows.values()].sort((a, b) => b.wanted - a.wanted || a.name.localeCompare(b.name)),
     statuses: byStatus.map((r) => ({ status: r.status, count: Number(r.count) })),

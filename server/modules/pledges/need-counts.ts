@@ -30,7 +30,7 @@ export async function needCounts(
   const memo = memoFor(sequelize);
   const key = `${withBlankets ? 'b' : 'p'}:${[...needIds].sort((a, b) => a - b).join(',')}`;
   const hit = memo.entries.get(key);
-  if (hit && hit.generation === memo.generation && Date.now() - hit.at < MEMO_MS) return hit.counts;
+  if (hit && hit.generation === memo.generation && Date.now() - hit.at < MEMO_MS) return hit.counts as Map<number, NeedCounts>;
   const generation = memo.generation;
   const counts = await countNeeds(needIds, withBlankets);
   // A write that committed while we counted makes this answer stale: hand it out, don't keep it.
@@ -42,6 +42,25 @@ export async function needCounts(
 }
 
 /**
+ * Another figure drawn from needs, pledges and blankets (the drive's blankets per status, say),
+ * kept by the same rule as the need counts: until any of those is written, and a few seconds at most.
+ */
+export async function keptUntilWrite<T>(key: string, compute: () => Promise<T>): Promise<T> {
+  const sequelize = Need.sequelize!;
+  watchWrites(sequelize);
+  const memo = memoFor(sequelize);
+  const hit = memo.entries.get(`x:${key}`);
+  if (hit && hit.generation === memo.generation && Date.now() - hit.at < MEMO_MS) return hit.counts as T;
+  const generation = memo.generation;
+  const value = await compute();
+  if (memo.generation === generation) {
+    if (memo.entries.size >= 200) memo.entries.clear();
+    memo.entries.set(`x:${key}`, { generation, at: Date.now(), counts: value });
+  }
+  return value;
+}
+
+/**
  * Counts are asked for on every view of "What's needed" and the recipient pages, and change only
  * when a pledge, a blanket or a need is written. So answers are kept per database until any such
  * write (the models' hooks, and again when the writing transaction commits), and for at most a few
@@ -50,7 +69,7 @@ export async function needCounts(
 const MEMO_MS = 5_000;
 interface Memo {
   generation: number;
-  entries: Map<string, { generation: number; at: number; counts: Map<number, NeedCounts> }>;
+  entries: Map<string, { generation: number; at: number; counts: unknown }>;
 }
 const memos = new WeakMap<Sequelize, Memo>();
 const watched = new WeakMap<Sequelize, Set<unknown>>();
