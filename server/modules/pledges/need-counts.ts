@@ -25,39 +25,42 @@ export async function needCounts(
   const withBlankets = opts.blankets !== false;
   // Inside a transaction the caller may be looking at its own uncommitted writes: no cache.
   if (opts.transaction) return countNeeds(needIds, withBlankets, opts.transaction);
-  const sequelize = Need.sequelize!;
-  watchWrites(sequelize);
-  const memo = memoFor(sequelize);
   const key = `${withBlankets ? 'b' : 'p'}:${[...needIds].sort((a, b) => a - b).join(',')}`;
-  const hit = memo.entries.get(key);
-  if (hit && hit.generation === memo.generation && Date.now() - hit.at < MEMO_MS) return hit.counts as Map<number, NeedCounts>;
-  const generation = memo.generation;
-  const counts = await countNeeds(needIds, withBlankets);
-  // A write that committed while we counted makes this answer stale: hand it out, don't keep it.
-  if (memo.generation === generation) {
-    if (memo.entries.size >= 200) memo.entries.clear();
-    memo.entries.set(key, { generation, at: Date.now(), counts });
-  }
-  return counts;
+  return kept(key, () => countNeeds(needIds, withBlankets));
 }
 
 /**
  * Another figure drawn from needs, pledges and blankets (the drive's blankets per status, say),
  * kept by the same rule as the need counts: until any of those is written, and a few seconds at most.
  */
-export async function keptUntilWrite<T>(key: string, compute: () => Promise<T>): Promise<T> {
+export function keptUntilWrite<T>(key: string, compute: () => Promise<T>): Promise<T> {
+  return kept(`x:${key}`, compute);
+}
+
+async function kept<T>(key: string, compute: () => Promise<T>): Promise<T> {
   const sequelize = Need.sequelize!;
   watchWrites(sequelize);
   const memo = memoFor(sequelize);
-  const hit = memo.entries.get(`x:${key}`);
+  const hit = memo.entries.get(key);
   if (hit && hit.generation === memo.generation && Date.now() - hit.at < MEMO_MS) return hit.counts as T;
   const generation = memo.generation;
-  const value = await compute();
-  if (memo.generation === generation) {
-    if (memo.entries.size >= 200) memo.entries.clear();
-    memo.entries.set(`x:${key}`, { generation, at: Date.now(), counts: value });
+  // Requests that arrive while the same figure is being counted, with nothing written since, share
+  // that count instead of each walking the blankets again (under load they came fifty at a time).
+  const running = memo.running.get(key);
+  if (running && running.generation === generation) return running.promise as Promise<T>;
+  const promise = compute();
+  memo.running.set(key, { generation, promise });
+  try {
+    const value = await promise;
+    // A write that committed while we counted makes this answer stale: hand it out, don't keep it.
+    if (memo.generation === generation) {
+      if (memo.entries.size >= 200) memo.entries.clear();
+      memo.entries.set(key, { generation, at: Date.now(), counts: value });
+    }
+    return value;
+  } finally {
+    if (memo.running.get(key)?.promise === promise) memo.running.delete(key);
   }
-  return value;
 }
 
 /**
@@ -70,13 +73,14 @@ const MEMO_MS = 5_000;
 interface Memo {
   generation: number;
   entries: Map<string, { generation: number; at: number; counts: unknown }>;
+  running: Map<string, { generation: number; promise: Promise<unknown> }>;
 }
 const memos = new WeakMap<Sequelize, Memo>();
 const watched = new WeakMap<Sequelize, Set<unknown>>();
 
 function memoFor(sequelize: Sequelize): Memo {
   let m = memos.get(sequelize);
-  if (!m) memos.set(sequelize, (m = { generation: 0, entries: new Map() }));
+  if (!m) memos.set(sequelize, (m = { generation: 0, entries: new Map(), running: new Map() }));
   return m;
 }
 
