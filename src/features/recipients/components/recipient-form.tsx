@@ -3,15 +3,13 @@ import { MapPin as MapPinIcon } from 'lucide-react';
 import { Button } from '@/components/ui/button';
 import { Checkbox, Field, Input, Select, Textarea } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
-import { PinMap } from '@/components/ui/pin-map';
+import { DEMO_TOWN_CENTRE, PinMap } from '@/components/ui/pin-map';
 import { POPULATION_LABELS, POPULATIONS } from '@shared/schemas/blanket-values';
 import type { Population } from '@shared/schemas/blanket';
 import { RECIPIENT_KINDS, RECIPIENT_KIND_LABELS } from '@shared/schemas/recipient-values';
 import { RecipientCreateSchema, type RecipientKind } from '@shared/schemas/recipient';
 import type { RecipientInput } from '../api/create-recipient';
 import { fieldErrors, zodErrors } from './field-errors';
-
-export const DEMO_TOWN_CENTRE = { lat: 46.2, lng: -27.4 };
 
 const blank: RecipientInput = {
   name: '',
