@@ -21,11 +21,9 @@ import { PageQuerySchema, SearchSchema } from './page-query';
 
 export const MAX_NOTES_LENGTH = 2000;
 export const MAX_COLOURS_LENGTH = 200;
-/** A blanket carries 1 to 4 photos. */
-export const MAX_PHOTOS_PER_BLANKET = 4;
-export const MAX_PHOTO_BYTES = 8 * 1024 * 1024;
-export const PHOTO_MIME_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
-export type PhotoMime = (typeof PHOTO_MIME_TYPES)[number];
+import { MAX_PHOTOS_PER_BLANKET, MAX_PHOTO_BYTES, PHOTO_MIME_TYPES, type PhotoMime } from './blanket-log-values';
+
+export { MAX_PHOTOS_PER_BLANKET, MAX_PHOTO_BYTES, PHOTO_MIME_TYPES, type PhotoMime };
 
 const id = (field: string) =>
   z

@@ -1,90 +1,29 @@
 import { z } from 'zod';
+import { YARN_WEIGHTS, FIBRES, FEATURES, SIZE_CATEGORIES, POPULATIONS, POPULATION_LABELS, BODY_STITCHES, BLANKET_STATUSES, MAX_SIDE_CM } from './blanket-values';
 
-/** Craft Yarn Council Standard Yarn Weight System categories, 0 (lace) to 7 (jumbo). */
-export const YARN_WEIGHTS = [0, 1, 2, 3, 4, 5, 6, 7] as const;
+export { YARN_WEIGHTS, FIBRES, FEATURES, SIZE_CATEGORIES, POPULATIONS, POPULATION_LABELS, BODY_STITCHES, BLANKET_STATUSES, MAX_SIDE_CM };
+
 export const YarnWeightSchema = z
   .number({ error: 'Yarn weight must be a number from 0 to 7' })
   .int('Yarn weight must be a whole number')
   .min(0, 'Yarn weight must be from 0 to 7')
   .max(7, 'Yarn weight must be from 0 to 7');
 
-export const FIBRES = [
-  'acrylic',
-  'cotton',
-  'wool',
-  'superwash-wool',
-  'acrylic-blend',
-  'cotton-blend',
-  'wool-blend',
-  'bamboo',
-  'polyester',
-  'chenille',
-  'nylon',
-  'alpaca',
-  'mohair',
-  'silk',
-  'other',
-] as const;
 export const FibreSchema = z.enum(FIBRES);
 export type Fibre = z.infer<typeof FibreSchema>;
 
-export const FEATURES = [
-  'fringe',
-  'tassels',
-  'pompoms',
-  'buttons',
-  'beads',
-  'applique',
-  'ribbons',
-  'open-lace',
-] as const;
 export const FeatureSchema = z.enum(FEATURES);
 export type Feature = z.infer<typeof FeatureSchema>;
 
-export const SIZE_CATEGORIES = ['preemie', 'baby', 'crib', 'child', 'teen', 'lap', 'throw', 'twin'] as const;
 export const SizeCategorySchema = z.enum(SIZE_CATEGORIES);
 export type SizeCategory = z.infer<typeof SizeCategorySchema>;
 
-export const POPULATIONS = ['preemie', 'infant', 'child', 'teen', 'adult', 'elder'] as const;
 export const PopulationSchema = z.enum(POPULATIONS);
 export type Population = z.infer<typeof PopulationSchema>;
-/** Who a recipient serves, as a badge or a form option says it. */
-export const POPULATION_LABELS: Record<Population, string> = {
-  preemie: 'Premature and newborn babies',
-  infant: 'Babies and toddlers',
-  child: 'Children',
-  teen: 'Teenagers',
-  adult: 'Adults',
-  elder: 'Older people in care',
-};
 
-export const BODY_STITCHES = [
-  'sc',
-  'hdc',
-  'dc',
-  'granny',
-  'ripple',
-  'moss',
-  'shell',
-  'knit-garter',
-  'knit-stockinette',
-  'other',
-] as const;
 export const BodyStitchSchema = z.enum(BODY_STITCHES);
 export type BodyStitch = z.infer<typeof BodyStitchSchema>;
 
-export const BLANKET_STATUSES = [
-  'in_progress',
-  'finished',
-  'booked',
-  'received',
-  'checked',
-  'needs_fix',
-  'declined',
-  'assigned',
-  'packed',
-  'delivered',
-] as const;
 export const BlanketStatusSchema = z.enum(BLANKET_STATUSES);
 export type BlanketStatus = z.infer<typeof BlanketStatusSchema>;
 
@@ -92,8 +31,6 @@ export const LabelNameSchema = z.enum(['first-name', 'anonymous']);
 /** What a blanket's tag says of its maker: their first name, or "Anonymous". */
 export type LabelName = z.infer<typeof LabelNameSchema>;
 
-/** Largest measured side we accept, in cm: past this it is a typing mistake, not a blanket. */
-export const MAX_SIDE_CM = 400;
 
 const sideCm = (label: string) =>
   z

@@ -138,7 +138,9 @@ export const BlanketCodeParamSchema = z.object({
     }),
 });
 
-export const MAX_TAGS_PER_SHEET = 60;
+import { MAX_TAGS_PER_SHEET } from './intake-values';
+
+export { MAX_TAGS_PER_SHEET };
 
 /** Worded for the person who followed a broken or hand-edited tag-sheet link, not for a programmer. */
 const TAGS_CHOOSE = 'Choose the blankets to print tags for from My blankets or a blanket’s own page';

@@ -1,22 +1,14 @@
 import { z } from 'zod';
+import { RECIPIENT_KINDS, RECIPIENT_KIND_LABELS } from './recipient-values';
 import { PopulationSchema, SizeCategorySchema } from './blanket';
 import { GuidelineSetSchema } from './guidelines';
 
-/** The kinds of place that receive blankets; `other` covers what the list does not name. */
-export const RECIPIENT_KINDS = ['neonatal-unit', 'childrens-ward', 'family-shelter', 'care-home', 'hospice', 'other'] as const;
+export { RECIPIENT_KINDS, RECIPIENT_KIND_LABELS };
+
 export const RecipientKindSchema = z.enum(RECIPIENT_KINDS, {
   error: `Kind must be one of ${RECIPIENT_KINDS.join(', ')}`,
 });
 export type RecipientKind = z.infer<typeof RecipientKindSchema>;
-
-export const RECIPIENT_KIND_LABELS: Record<RecipientKind, string> = {
-  'neonatal-unit': 'Newborn unit',
-  'childrens-ward': "Children's ward",
-  'family-shelter': 'Family shelter',
-  'care-home': 'Care home',
-  hospice: 'Hospice',
-  other: 'Other',
-};
 
 const text = (label: string, max: number) =>
   z.string({ error: `${label} must be text` }).trim().max(max, `${label}: at most ${max} characters`);

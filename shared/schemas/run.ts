@@ -115,13 +115,7 @@ export const ExportListQuerySchema = PageQuerySchema;
 export type StopState = 'planned' | 'packed' | 'delivered';
 export type RunState = 'planned' | 'packed' | 'partly-delivered' | 'delivered' | 'empty';
 
-export const RUN_STATE_LABELS: Record<RunState, string> = {
-  empty: 'No stops yet',
-  planned: 'Being planned',
-  packed: 'Packed, ready to go',
-  'partly-delivered': 'On the road',
-  delivered: 'All delivered',
-};
+export { RUN_STATE_LABELS } from './run-values';
 
 export interface RunBlanketView {
   id: number;

@@ -1,6 +1,8 @@
 import { z } from 'zod';
 
-export const ROLES = ['volunteer', 'organiser', 'coordinator'] as const;
+import { ROLES } from './user-values';
+
+export { ROLES };
 export const RoleSchema = z.enum(ROLES);
 export type Role = z.infer<typeof RoleSchema>;
 

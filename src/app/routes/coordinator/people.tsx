@@ -12,7 +12,8 @@ import { Alert } from '@/components/ui/alert';
 import { usePeople } from '@/features/people/api/get-people';
 import { useUpdatePerson } from '@/features/people/api/update-person';
 import { useMe } from '@/features/auth/api/get-me';
-import { ROLES, type Role } from '@shared/schemas/user';
+import { ROLES } from '@shared/schemas/user-values';
+import type { Role } from '@shared/schemas/user';
 
 const roleWords: Record<Role, string> = { volunteer: 'Maker', organiser: 'Organiser', coordinator: 'Coordinator' };
 

@@ -15,8 +15,8 @@ import { usePutGuidelines } from '@/features/recipients/api/put-guidelines';
 import { RecipientForm } from '@/features/recipients/components/recipient-form';
 import { GuidelineEditor } from '@/features/recipients/components/guideline-editor';
 import { NeedsEditor } from '@/features/recipients/components/needs-editor';
-import { POPULATION_LABELS } from '@shared/schemas/blanket';
-import { RECIPIENT_KIND_LABELS } from '@shared/schemas/recipient';
+import { POPULATION_LABELS } from '@shared/schemas/blanket-values';
+import { RECIPIENT_KIND_LABELS } from '@shared/schemas/recipient-values';
 import { cautionsFor } from '@shared/guidelines/cautions';
 
 const TABS = [

@@ -19,7 +19,8 @@ import { NeedCard } from '@/features/assignments/components/need-card';
 import { WaitingBlanketRow } from '@/features/assignments/components/waiting-blanket-row';
 import { SuggestionReview } from '@/features/assignments/components/suggestion-review';
 import { needLabel, sizeText } from '@/features/assignments/components/words';
-import { SIZE_CATEGORIES, type SizeCategory } from '@shared/schemas/blanket';
+import { SIZE_CATEGORIES } from '@shared/schemas/blanket-values';
+import type { SizeCategory } from '@shared/schemas/blanket';
 import { pageCount } from '@shared/schemas/page';
 
 const num = (v: string | null) => (v ? Number(v) || undefined : undefined);

@@ -4,7 +4,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { ButtonLink } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { BlanketsTable, type Choosing } from '@/features/blankets/components/blankets-table';
-import { MAX_TAGS_PER_SHEET } from '@shared/schemas/intake';
+import { MAX_TAGS_PER_SHEET } from '@shared/schemas/intake-values';
 
 /** "My blankets": every blanket I have logged, where each one is up to, and its tag code. */
 export default function MyBlanketsPage() {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { FeatureSchema, MAX_SIDE_CM, YarnWeightSchema, BodyStitchSchema, LabelNameSchema, type BlanketFields } from '@shared/schemas/blanket';
+import { MAX_SIDE_CM } from '@shared/schemas/blanket-values';
+import { FeatureSchema, YarnWeightSchema, BodyStitchSchema, LabelNameSchema, type BlanketFields } from '@shared/schemas/blanket';
 import { BlanketCreateSchema, INITIAL_STATUSES, type BlanketCreateInput, type BlanketUpdate } from '@shared/schemas/blanket-log';
 import { fromCm, toCm, type LengthUnit } from '@shared/sizing/units';
 

@@ -10,7 +10,7 @@ import { applyServerErrors } from '@/components/ui/form-errors';
 import { ApiError } from '@/lib/api-client';
 import { formatDay } from '@/components/ui/format-day';
 import { cn } from '@/components/ui/cn';
-import { BODY_STITCHES, FEATURES, FIBRES, YARN_WEIGHTS } from '@shared/schemas/blanket';
+import { BODY_STITCHES, FEATURES, FIBRES, YARN_WEIGHTS } from '@shared/schemas/blanket-values';
 import type { PledgeView, RecipientBrief } from '@shared/schemas/pledge';
 import { BORDER_LIBRARY } from '@shared/border/library';
 import { capitalise, featureLabel, fibreLabel } from '@shared/guidelines/wording';

@@ -1,6 +1,6 @@
 import { useEffect, useId, useMemo, useState } from 'react';
 import { ImagePlus, X } from 'lucide-react';
-import { MAX_PHOTO_BYTES, MAX_PHOTOS_PER_BLANKET, PHOTO_MIME_TYPES } from '@shared/schemas/blanket-log';
+import { MAX_PHOTO_BYTES, MAX_PHOTOS_PER_BLANKET, PHOTO_MIME_TYPES } from '@shared/schemas/blanket-log-values';
 
 const MB = 1024 * 1024;
 

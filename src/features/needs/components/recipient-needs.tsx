@@ -6,7 +6,7 @@ import { ProgressBar } from '@/components/ui/progress-bar';
 import { Cautions } from '@/components/ui/cautions';
 import { daysUntil, formatDay } from '@/components/ui/format-day';
 import { useDriveToday } from '@/lib/drive-clock';
-import { POPULATION_LABELS } from '@shared/schemas/blanket';
+import { POPULATION_LABELS } from '@shared/schemas/blanket-values';
 import type { OpenNeed, RecipientBrief } from '@shared/schemas/pledge';
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import { capitalise } from '@shared/guidelines/wording';

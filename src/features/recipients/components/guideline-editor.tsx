@@ -6,7 +6,8 @@ import { Alert } from '@/components/ui/alert';
 import { defaultGuidelines } from '@shared/guidelines/defaults';
 import { describeGuidelines } from '@shared/guidelines/describe';
 import { featureLabel, fibreLabel, formatIn, yarnWeightName } from '@shared/guidelines/wording';
-import { FEATURES, FIBRES, POPULATION_LABELS, YARN_WEIGHTS, type Feature, type Fibre } from '@shared/schemas/blanket';
+import { FEATURES, FIBRES, POPULATION_LABELS, YARN_WEIGHTS } from '@shared/schemas/blanket-values';
+import type { Feature, Fibre } from '@shared/schemas/blanket';
 import { GuidelineSetSchema, type GuidelineSet } from '@shared/schemas/guidelines';
 import { fieldErrors, zodErrors } from './field-errors';
 

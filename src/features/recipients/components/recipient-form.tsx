@@ -4,8 +4,10 @@ import { Button } from '@/components/ui/button';
 import { Checkbox, Field, Input, Select, Textarea } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { PinMap } from '@/components/ui/pin-map';
-import { POPULATION_LABELS, POPULATIONS, type Population } from '@shared/schemas/blanket';
-import { RECIPIENT_KINDS, RECIPIENT_KIND_LABELS, RecipientCreateSchema, type RecipientKind } from '@shared/schemas/recipient';
+import { POPULATION_LABELS, POPULATIONS } from '@shared/schemas/blanket-values';
+import type { Population } from '@shared/schemas/blanket';
+import { RECIPIENT_KINDS, RECIPIENT_KIND_LABELS } from '@shared/schemas/recipient-values';
+import { RecipientCreateSchema, type RecipientKind } from '@shared/schemas/recipient';
 import type { RecipientInput } from '../api/create-recipient';
 import { fieldErrors, zodErrors } from './field-errors';
 

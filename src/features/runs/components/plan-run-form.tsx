@@ -7,7 +7,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { isoDayFrom } from '@/components/ui/format-day';
 import { useDriveToday } from '@/lib/drive-clock';
 import { ApiError } from '@/lib/api-client';
-import { POPULATION_LABELS } from '@shared/schemas/blanket';
+import { POPULATION_LABELS } from '@shared/schemas/blanket-values';
 import type { RunCreate, WaitingRecipient } from '@shared/schemas/run';
 
 interface Option {

@@ -1,5 +1,6 @@
 import { Badge, type Tone } from '@/components/ui/badge';
-import { RUN_STATE_LABELS, type RunState, type StopState } from '@shared/schemas/run';
+import { RUN_STATE_LABELS } from '@shared/schemas/run-values';
+import type { RunState, StopState } from '@shared/schemas/run';
 
 const RUN_TONES: Record<RunState, Tone> = { empty: 'neutral', planned: 'heather', packed: 'marigold', 'partly-delivered': 'sky', delivered: 'moss' };
 

@@ -4,7 +4,7 @@ import { Card } from '@/components/ui/card';
 import { Button } from '@/components/ui/button';
 import { Field, Input } from '@/components/ui/field';
 import { Cautions } from '@/components/ui/cautions';
-import { POPULATION_LABELS } from '@shared/schemas/blanket';
+import { POPULATION_LABELS } from '@shared/schemas/blanket-values';
 import type { RunStopView } from '@shared/schemas/run';
 import { km, StopStateBadge } from './run-state-badge';
 import type { RunChange } from '../api/change-run';
