@@ -1,8 +1,9 @@
 /**
  * The blanket vocabulary (yarn weights, fibres, features, sizes, who a recipient serves, stitches,
- * statuses), without zod: a page that only shows or lists these values loads none of the schema
- * library. ./blanket.ts re-exports them, so the server and the schemas keep importing from there.
+ * statuses) and the picker of the guideline-check fields, without zod: a page that only shows or
+ * lists these values loads none of the schema library. ./blanket.ts re-exports them, so the server and the schemas keep importing from there.
  */
+import type { BlanketFields } from './blanket';
 
 /** Craft Yarn Council Standard Yarn Weight System categories, 0 (lace) to 7 (jumbo). */
 export const YARN_WEIGHTS = [0, 1, 2, 3, 4, 5, 6, 7] as const;
@@ -78,3 +79,22 @@ export const BLANKET_STATUSES = [
 
 /** Largest measured side we accept, in cm: past this it is a typing mistake, not a blanket. */
 export const MAX_SIDE_CM = 400;
+
+/**
+ * Only the guideline-check fields of a stored blanket or a view of one, so a check never sees the
+ * rest of the row. The types stay the source's own: a view may carry fibres as plain strings.
+ */
+export function pickBlanketFields<T extends Record<keyof BlanketFields, unknown>>(b: T): Pick<T, keyof BlanketFields> {
+  return {
+    widthCm: b.widthCm,
+    lengthCm: b.lengthCm,
+    yarnWeight: b.yarnWeight,
+    fibres: b.fibres,
+    features: b.features,
+    machineWashable: b.machineWashable,
+    dryerSafe: b.dryerSafe,
+    smokeFree: b.smokeFree,
+    petFree: b.petFree,
+    newYarn: b.newYarn,
+  };
+}

@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { YARN_WEIGHTS, FIBRES, FEATURES, SIZE_CATEGORIES, POPULATIONS, POPULATION_LABELS, BODY_STITCHES, BLANKET_STATUSES, MAX_SIDE_CM } from './blanket-values';
+import { YARN_WEIGHTS, FIBRES, FEATURES, SIZE_CATEGORIES, POPULATIONS, POPULATION_LABELS, BODY_STITCHES, BLANKET_STATUSES, MAX_SIDE_CM, pickBlanketFields } from './blanket-values';
 
-export { YARN_WEIGHTS, FIBRES, FEATURES, SIZE_CATEGORIES, POPULATIONS, POPULATION_LABELS, BODY_STITCHES, BLANKET_STATUSES, MAX_SIDE_CM };
+export { YARN_WEIGHTS, FIBRES, FEATURES, SIZE_CATEGORIES, POPULATIONS, POPULATION_LABELS, BODY_STITCHES, BLANKET_STATUSES, MAX_SIDE_CM, pickBlanketFields };
 
 export const YarnWeightSchema = z
   .number({ error: 'Yarn weight must be a number from 0 to 7' })
@@ -56,24 +56,6 @@ export const BlanketFieldsSchema = z.object({
 });
 export type BlanketFields = z.infer<typeof BlanketFieldsSchema>;
 
-/**
- * Only the guideline-check fields of a stored blanket or a view of one, so a check never sees the
- * rest of the row. The types stay the source's own: a view may carry fibres as plain strings.
- */
-export function pickBlanketFields<T extends Record<keyof BlanketFields, unknown>>(b: T): Pick<T, keyof BlanketFields> {
-  return {
-    widthCm: b.widthCm,
-    lengthCm: b.lengthCm,
-    yarnWeight: b.yarnWeight,
-    fibres: b.fibres,
-    features: b.features,
-    machineWashable: b.machineWashable,
-    dryerSafe: b.dryerSafe,
-    smokeFree: b.smokeFree,
-    petFree: b.petFree,
-    newYarn: b.newYarn,
-  };
-}
 
 /** The size a blanket is held to: measured at intake where it has been, else as its maker logged it. */
 export function sizeOnRecord(b: { widthCm: number; lengthCm: number; measuredWidthCm?: number | null; measuredLengthCm?: number | null }): {

@@ -5,7 +5,9 @@ import { IsoDaySchema } from './recipient';
 import { PageQuerySchema, SearchSchema } from './page-query';
 
 /** Most blankets one person promises in one pledge; past this it is a typing slip, not a plan. */
-export const MAX_PLEDGE_QUANTITY = 50;
+import { MAX_PLEDGE_QUANTITY } from './pledge-values';
+
+export { MAX_PLEDGE_QUANTITY };
 /** How far ahead a finish date may be, in days: a drive runs for months, not years. */
 export const MAX_PLEDGE_DAYS_AHEAD = 730;
 

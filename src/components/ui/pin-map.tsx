@@ -26,6 +26,9 @@ interface PinMapProps {
   onSelect?: (id: string | number) => void;
 }
 
+/** Where a map with no pins yet looks first: the middle of the demo town. */
+export const DEMO_TOWN_CENTRE = { lat: 46.2, lng: -27.4 };
+
 // Leaflet is most of a map page's JavaScript: it loads on its own, after the page's text has painted.
 const PinMapCanvas = lazy(() => import('./pin-map-canvas'));
 

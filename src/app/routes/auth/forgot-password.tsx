@@ -1,15 +1,16 @@
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
-import { PasswordResetRequestSchema } from '@shared/schemas/user';
+import { lazyZodResolver } from '@/lib/lazy-zod-resolver';
 import { useRequestPasswordReset } from '@/features/auth/api/request-password-reset';
 import { Button } from '@/components/ui/button';
 import { Field, Input } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { AuthCard } from './auth-card';
 
+const resolver = lazyZodResolver<{ email: string }>(() => import('@shared/schemas/user').then((m) => m.PasswordResetRequestSchema));
+
 export default function ForgotPasswordPage() {
   const reset = useRequestPasswordReset();
-  const { register, handleSubmit, formState } = useForm<{ email: string }>({ resolver: zodResolver(PasswordResetRequestSchema) });
+  const { register, handleSubmit, formState } = useForm<{ email: string }>({ resolver });
   return (
     <AuthCard title="Forgotten password" lead="We'll e-mail you a link to choose a new one. It works once, for an hour.">
       {reset.isSuccess ? (

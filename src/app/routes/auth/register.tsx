@@ -1,7 +1,6 @@
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { Link, useNavigate } from 'react-router-dom';
-import { RegisterSchema } from '@shared/schemas/user';
+import { lazyZodResolver } from '@/lib/lazy-zod-resolver';
 import { useRegister } from '@/features/auth/api/register';
 import { Button } from '@/components/ui/button';
 import { Field, Input } from '@/components/ui/field';
@@ -10,10 +9,12 @@ import { AuthCard } from './auth-card';
 
 type Form = { name: string; email: string; password: string };
 
+const resolver = lazyZodResolver<Form>(() => import('@shared/schemas/user').then((m) => m.RegisterSchema));
+
 export default function RegisterPage() {
   const reg = useRegister();
   const navigate = useNavigate();
-  const { register, handleSubmit, formState } = useForm<Form>({ resolver: zodResolver(RegisterSchema) });
+  const { register, handleSubmit, formState } = useForm<Form>({ resolver });
   const onSubmit = handleSubmit((v) => reg.mutate(v, { onSuccess: () => navigate('/home', { replace: true }) }));
   return (
     <AuthCard title="Join as a maker" lead="Make an account to pledge blankets, save border plans and log what you finish.">

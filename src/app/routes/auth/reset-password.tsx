@@ -1,24 +1,21 @@
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
 import { useNavigate, useSearchParams } from 'react-router-dom';
-import { PasswordSchema } from '@shared/schemas/user';
+import { lazyZodResolver } from '@/lib/lazy-zod-resolver';
+import type { ResetPasswordForm } from './reset-password-schema';
 import { useConfirmPasswordReset } from '@/features/auth/api/confirm-password-reset';
 import { Button } from '@/components/ui/button';
 import { Field, Input } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { AuthCard } from './auth-card';
 
-const FormSchema = z
-  .object({ password: PasswordSchema, again: z.string() })
-  .refine((v) => v.password === v.again, { path: ['again'], message: 'The two passwords are not the same' });
+const resolver = lazyZodResolver<ResetPasswordForm>(() => import('./reset-password-schema').then((m) => m.ResetPasswordFormSchema));
 
 export default function ResetPasswordPage() {
   const [params] = useSearchParams();
   const token = params.get('token') ?? '';
   const confirm = useConfirmPasswordReset();
   const navigate = useNavigate();
-  const { register, handleSubmit, formState } = useForm<z.infer<typeof FormSchema>>({ resolver: zodResolver(FormSchema) });
+  const { register, handleSubmit, formState } = useForm<ResetPasswordForm>({ resolver });
   return (
     <AuthCard title="Choose a new password">
       <form

@@ -9,10 +9,9 @@ import { Select } from '@/components/ui/field';
 import { Loading } from '@/components/ui/spinner';
 import { QueryError } from '@/components/ui/query-error';
 import { EmptyState } from '@/components/ui/empty-state';
-import { PinMap } from '@/components/ui/pin-map';
+import { DEMO_TOWN_CENTRE, PinMap } from '@/components/ui/pin-map';
 import { useRecipients } from '@/features/recipients/api/get-recipients';
 import { POPULATION_LABELS } from '@shared/schemas/blanket-values';
-import { DEMO_TOWN_CENTRE } from '@/features/recipients/components/recipient-form';
 import { RECIPIENT_KIND_LABELS } from '@shared/schemas/recipient-values';
 import { cautionsFor } from '@shared/guidelines/cautions';
 

@@ -7,10 +7,10 @@ import { Button } from '@/components/ui/button';
 import { Loading } from '@/components/ui/spinner';
 import { QueryError } from '@/components/ui/query-error';
 import { EmptyState } from '@/components/ui/empty-state';
-import { PinMap } from '@/components/ui/pin-map';
+import { DEMO_TOWN_CENTRE, PinMap } from '@/components/ui/pin-map';
 import { useSites } from '@/features/sites/api/get-sites';
 import { useSaveSite } from '@/features/sites/api/save-site';
-import { SiteForm, TOWN_CENTRE } from '@/features/sites/components/site-form';
+import { SiteForm } from '@/features/sites/components/site-form';
 import { ScheduleForm, hoursSummary } from '@/features/sites/components/schedule-form';
 import { DriveZoneForm } from '@/features/sites/components/drive-zone-form';
 
@@ -55,7 +55,7 @@ export default function SitesPage() {
             </EmptyState>
           ) : (
             <>
-              <PinMap label="Map of the drop-off sites" fallbackCentre={TOWN_CENTRE} pins={data.filter((s) => s.lat !== null && s.lng !== null).map((s) => ({ id: s.id, lat: s.lat!, lng: s.lng!, label: s.name, kind: 'site' as const }))} />
+              <PinMap label="Map of the drop-off sites" fallbackCentre={DEMO_TOWN_CENTRE} pins={data.filter((s) => s.lat !== null && s.lng !== null).map((s) => ({ id: s.id, lat: s.lat!, lng: s.lng!, label: s.name, kind: 'site' as const }))} />
               <ul className="grid gap-4 md:grid-cols-2">
                 {data.map((s) => (
                   <li key={s.id}>

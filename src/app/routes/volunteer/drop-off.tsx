@@ -11,10 +11,9 @@ import { Checkbox } from '@/components/ui/field';
 import { Loading } from '@/components/ui/spinner';
 import { QueryError } from '@/components/ui/query-error';
 import { EmptyState } from '@/components/ui/empty-state';
-import { PinMap } from '@/components/ui/pin-map';
+import { DEMO_TOWN_CENTRE, PinMap } from '@/components/ui/pin-map';
 import { cn } from '@/components/ui/cn';
 import { useSites } from '@/features/sites/api/get-sites';
-import { TOWN_CENTRE } from '@/features/sites/components/site-form';
 import { useSoonest } from '@/features/drop-off/api/get-soonest';
 import { useMyBookings } from '@/features/drop-off/api/get-bookings';
 import { useFinishedBlankets } from '@/features/drop-off/api/get-finished-blankets';
@@ -222,7 +221,7 @@ export default function DropOffPage() {
 
             <div className="space-y-3">
               <h3 className="text-lg font-bold">Or choose a site</h3>
-              {pins.length > 0 && <PinMap label="Map of the drop-off sites; choose one" fallbackCentre={TOWN_CENTRE} pins={pins} onSelect={(id) => pickSite(Number(id))} />}
+              {pins.length > 0 && <PinMap label="Map of the drop-off sites; choose one" fallbackCentre={DEMO_TOWN_CENTRE} pins={pins} onSelect={(id) => pickSite(Number(id))} />}
               <ul className="grid gap-2 md:grid-cols-3" aria-label="Drop-off sites">
                 {siteList.map((s) => {
                   const next = soonest.data?.nextBySite[s.id];

@@ -4,12 +4,14 @@ import { Button } from '@/components/ui/button';
 import { Field, Input, Select } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { ApiError } from '@/lib/api-client';
-import { IntakeBodySchema } from '@shared/schemas/intake';
+import { preload } from '@/lib/lazy-zod-resolver';
 import type { IntakeBlanketView } from '@shared/schemas/intake-views';
 import { useIntakeSites } from '../api/get-intake-sites';
 import { useReceiveBlanket } from '../api/receive-blanket';
 
 const SITE_KEY = 'kindloop.intake.siteId';
+
+const intakeBodySchema = preload(() => import('@shared/schemas/intake').then((m) => m.IntakeBodySchema));
 
 export function rememberedSiteId(): number | null {
   const v = Number(localStorage.getItem(SITE_KEY));
@@ -34,10 +36,10 @@ export function ReceivePanel({ blanket }: { blanket: IntakeBlanketView }) {
     <form
       noValidate
       className="space-y-4"
-      onSubmit={(e) => {
+      onSubmit={async (e) => {
         e.preventDefault();
         const body = { siteId: chosen ?? 0, widthCm: Number(width), lengthCm: Number(length), note: note || undefined, version: blanket.version };
-        const parsed = IntakeBodySchema.safeParse(body);
+        const parsed = (await intakeBodySchema()).safeParse(body);
         if (!parsed.success) {
           const out: Record<string, string> = {};
           for (const i of parsed.error.issues) out[i.path.join('.')] ??= i.message;

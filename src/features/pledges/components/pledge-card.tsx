@@ -1,6 +1,5 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { AlarmClock, CalendarClock, Pencil, Plus, XCircle } from 'lucide-react';
 import { Card } from '@/components/ui/card';
 import { Badge } from '@/components/ui/badge';
@@ -11,7 +10,9 @@ import { ProgressBar } from '@/components/ui/progress-bar';
 import { applyServerErrors } from '@/components/ui/form-errors';
 import { daysUntil, formatDay, isoDayFrom } from '@/components/ui/format-day';
 import { useDriveToday } from '@/lib/drive-clock';
-import { MAX_PLEDGE_QUANTITY, PledgeCreateSchema, type PledgeView } from '@shared/schemas/pledge';
+import { MAX_PLEDGE_QUANTITY } from '@shared/schemas/pledge-values';
+import type { PledgeView } from '@shared/schemas/pledge';
+import { lazyZodResolver } from '@/lib/lazy-zod-resolver';
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import { useUpdatePledge } from '../api/update-pledge';
 import { useCancelPledge } from '../api/cancel-pledge';
@@ -31,11 +32,15 @@ interface EditValues {
   dueDate: string;
 }
 
+const editResolver = lazyZodResolver<EditValues>(() =>
+  import('@shared/schemas/pledge').then((m) => m.PledgeCreateSchema.pick({ quantity: true, dueDate: true })),
+);
+
 function EditPledge({ pledge, onClose, onChanged }: { pledge: PledgeView; onClose: () => void; onChanged?: () => void }) {
   const update = useUpdatePledge(onChanged);
   const today = useDriveToday();
   const { register, handleSubmit, formState, setError } = useForm<EditValues>({
-    resolver: zodResolver(PledgeCreateSchema.pick({ quantity: true, dueDate: true })),
+    resolver: editResolver,
     defaultValues: { quantity: pledge.quantity, dueDate: pledge.dueDate },
   });
   const onSubmit = handleSubmit((v) =>

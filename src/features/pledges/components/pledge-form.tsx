@@ -1,6 +1,5 @@
 import { useEffect } from 'react';
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { Button } from '@/components/ui/button';
 import { Field, Input, Select } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
@@ -9,7 +8,9 @@ import { formatDay, isoDayFrom } from '@/components/ui/format-day';
 import { useDriveToday } from '@/lib/drive-clock';
 import { SIZE_CATEGORIES } from '@shared/schemas/blanket-values';
 import type { SizeCategory } from '@shared/schemas/blanket';
-import { MAX_PLEDGE_QUANTITY, PledgeCreateSchema, type PledgeCreate, type PledgeView } from '@shared/schemas/pledge';
+import { MAX_PLEDGE_QUANTITY } from '@shared/schemas/pledge-values';
+import type { PledgeCreate, PledgeView } from '@shared/schemas/pledge';
+import { lazyZodResolver } from '@/lib/lazy-zod-resolver';
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import { capitalise } from '@shared/guidelines/wording';
 import { useCreatePledge } from '../api/create-pledge';
@@ -33,13 +34,15 @@ interface Props {
 
 const FIELDS = ['needId', 'quantity', 'sizeCategory', 'dueDate'] as const;
 
+const resolver = lazyZodResolver<PledgeCreate>(() => import('@shared/schemas/pledge').then((m) => m.PledgeCreateSchema));
+
 /** "I'll make N by this day": quantity and date, and the size when no need is chosen. */
 export function PledgeForm({ target, onDone, onChanged, onCancel }: Props) {
   const create = useCreatePledge(onChanged);
   const today = useDriveToday();
   const fourWeeks = isoDayFrom(today, 28);
   const { register, handleSubmit, formState, setError, setFocus } = useForm<PledgeCreate>({
-    resolver: zodResolver(PledgeCreateSchema),
+    resolver,
     defaultValues: {
       needId: target?.needId ?? null,
       quantity: 1,

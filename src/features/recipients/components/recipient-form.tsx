@@ -3,15 +3,16 @@ import { MapPin as MapPinIcon } from 'lucide-react';
 import { Button } from '@/components/ui/button';
 import { Checkbox, Field, Input, Select, Textarea } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
-import { PinMap } from '@/components/ui/pin-map';
+import { DEMO_TOWN_CENTRE, PinMap } from '@/components/ui/pin-map';
 import { POPULATION_LABELS, POPULATIONS } from '@shared/schemas/blanket-values';
 import type { Population } from '@shared/schemas/blanket';
 import { RECIPIENT_KINDS, RECIPIENT_KIND_LABELS } from '@shared/schemas/recipient-values';
-import { RecipientCreateSchema, type RecipientKind } from '@shared/schemas/recipient';
+import type { RecipientKind } from '@shared/schemas/recipient';
+import { preload } from '@/lib/lazy-zod-resolver';
 import type { RecipientInput } from '../api/create-recipient';
 import { fieldErrors, zodErrors } from './field-errors';
 
-export const DEMO_TOWN_CENTRE = { lat: 46.2, lng: -27.4 };
+const recipientSchema = preload(() => import('@shared/schemas/recipient').then((m) => m.RecipientCreateSchema));
 
 const blank: RecipientInput = {
   name: '',
@@ -51,9 +52,9 @@ export function RecipientForm({ initial, submitLabel, busy, error, onSubmit, oth
   const set = <K extends keyof RecipientInput>(key: K, value: RecipientInput[K]) => setDraft((d) => ({ ...d, [key]: value }));
   const num = (s: string) => (s.trim() === '' ? null : Number(s));
 
-  const submit = (e: FormEvent) => {
+  const submit = async (e: FormEvent) => {
     e.preventDefault();
-    const parsed = RecipientCreateSchema.safeParse(draft);
+    const parsed = (await recipientSchema()).safeParse(draft);
     if (!parsed.success) {
       setLocal(zodErrors(parsed.error.issues));
       return;

@@ -2,12 +2,10 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { Checkbox, Field, Input, Textarea } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
-import { PinMap } from '@/components/ui/pin-map';
+import { DEMO_TOWN_CENTRE, PinMap } from '@/components/ui/pin-map';
 import { ApiError } from '@/lib/api-client';
 import { SiteCreateSchema, type SiteView } from '@shared/schemas/site';
 import type { SiteInput } from '../api/save-site';
-
-export const TOWN_CENTRE = { lat: 46.2, lng: -27.4 };
 
 function errorsOf(err: unknown, issues: ReadonlyArray<{ path: PropertyKey[]; message: string }>): Record<string, string> {
   const out: Record<string, string> = {};
@@ -60,7 +58,7 @@ export function SiteForm({ site, others, busy, error, onSubmit, onCancel }: Prop
           {(a) => <Input id={a.id} aria-invalid={a.invalid} aria-describedby={a.describedBy} value={d.address} onChange={(e) => setD({ ...d, address: e.target.value })} />}
         </Field>
       </div>
-      <PinMap label="Map: click to place the site's pin" pins={pins} fallbackCentre={TOWN_CENTRE} onPick={(lat, lng) => setD((x) => ({ ...x, lat, lng }))} />
+      <PinMap label="Map: click to place the site's pin" pins={pins} fallbackCentre={DEMO_TOWN_CENTRE} onPick={(lat, lng) => setD((x) => ({ ...x, lat, lng }))} />
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Latitude" error={errors.lat}>
           {(a) => <Input id={a.id} inputMode="decimal" aria-invalid={a.invalid} aria-describedby={a.describedBy} value={d.lat ?? ''} onChange={(e) => setD({ ...d, lat: num(e.target.value) })} />}
