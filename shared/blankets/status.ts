@@ -45,7 +45,8 @@ export const moveChannel = (move: StatusMove): MoveChannel => move.via ?? 'plain
 
 const STAFF: readonly Mover[] = ['organiser', 'coordinator'];
 const MAKER: readonly Mover[] = ['maker'];
-const DELIVERY: readonly Mover[] = ['coordinator'];
+/** Delivering: coordinators, and an organiser on a run they drive (the runs module checks which run). */
+const DELIVERY: readonly Mover[] = ['organiser', 'coordinator'];
 
 export const STATUS_MOVES: readonly StatusMove[] = [
   { from: 'in_progress', to: 'finished', direction: 'forward', by: MAKER, action: 'Mark as finished' },

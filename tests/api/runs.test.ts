@@ -39,8 +39,8 @@ beforeAll(async () => {
 });
 afterAll(async () => t.close());
 
-async function newRun(recipientIds: number[] = []): Promise<RunView> {
-  const res = await coordinator.post('/api/runs', { runDate: today, driverId: driver.id, startSiteId: site.id, recipientIds });
+async function newRun(recipientIds: number[] = [], driverId = driver.id): Promise<RunView> {
+  const res = await coordinator.post('/api/runs', { runDate: today, driverId, startSiteId: site.id, recipientIds });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return res.body.run as RunView;
 }
@@ -126,7 +126,8 @@ describe('packing and delivering', () => {
   it('packs a stop into boxes, delivers it with who signed, and records each move in the history', async () => {
     const a = await assignedBlanket(maker.id, recipients.shelter.id);
     const b = await assignedBlanket(maker.id, recipients.shelter.id);
-    const run = await newRun([recipients.shelter.id]);
+    // Driven by a maker who offered a car: the organiser at the desk packs, but does not record the hand-over.
+    const run = await newRun([recipients.shelter.id], maker.id);
     const stop = run.stops[0]!;
     const packed = await organiser.post(`/api/runs/${run.id}/stops/${stop.id}/packed`, { boxes: [{ blanketId: b.id, box: 2 }] });
     expect(packed.status, JSON.stringify(packed.body)).toBe(200);
@@ -138,9 +139,11 @@ describe('packing and delivering', () => {
     expect(ev).toMatchObject({ kind: 'packing' });
     expect(ev!.data).toMatchObject({ runId: run.id, stopId: stop.id, box: 2 });
 
-    // Delivering is the coordinators' step, as in the status machine.
+    // Delivering is recorded by a coordinator or by the run's driver; an organiser who does not drive it is refused.
     const byOrganiser = await organiser.post(`/api/runs/${run.id}/stops/${stop.id}/delivered`, { receivedCount: 2, signedBy: 'Desk' });
     expect(byOrganiser.status).toBe(403);
+    expect(byOrganiser.body.error.message).toMatch(/driver of this run or a coordinator/);
+    expect((await Blanket.findByPk(a.id))!.status).toBe('packed');
     const missing = await coordinator.post(`/api/runs/${run.id}/stops/${stop.id}/delivered`, { receivedCount: 2 });
     expect(missing.status).toBe(400);
     expect(missing.body.error.issues[0].path).toBe('signedBy');
@@ -151,6 +154,21 @@ describe('packing and delivering', () => {
     expect((done.body.run as RunView).state).toBe('delivered');
     expect((await Blanket.findByPk(b.id))!.status).toBe('delivered');
     expect(await BlanketEvent.findOne({ where: { blanketId: b.id, toStatus: 'delivered', kind: 'delivery' } })).not.toBeNull();
+  });
+
+  it('the organiser who drives the run records its deliveries, and can undo one', async () => {
+    const a = await assignedBlanket(maker.id, recipients.shelter.id);
+    const run = await newRun([recipients.shelter.id], driver.id);
+    const stop = run.stops[0]!;
+    expect((await organiser.post(`/api/runs/${run.id}/stops/${stop.id}/packed`, {})).status).toBe(200);
+    const done = await organiser.post(`/api/runs/${run.id}/stops/${stop.id}/delivered`, { receivedCount: 1, signedBy: 'Family room' });
+    expect(done.status, JSON.stringify(done.body)).toBe(200);
+    expect((await Blanket.findByPk(a.id))!.status).toBe('delivered');
+    const ev = await BlanketEvent.findOne({ where: { blanketId: a.id, toStatus: 'delivered' } });
+    expect(ev!.actorId).toBe(driver.id);
+    const undo = await organiser.delete(`/api/runs/${run.id}/stops/${stop.id}/delivered`).send({ reason: 'Counted at the wrong door' });
+    expect(undo.status, JSON.stringify(undo.body)).toBe(200);
+    expect((await Blanket.findByPk(a.id))!.status).toBe('packed');
   });
 
   it('steps back only with a reason: undo a delivery, then unpack', async () => {

@@ -57,3 +57,16 @@ test('a coordinator plans a run, exports the delivery list and marks a stop deli
   await page.setViewportSize({ width: 390, height: 844 });
   await shot(page, 'delivery-exports-390');
 });
+
+test('the organiser who drives a run can record its hand-overs; planning stays with the coordinator', async ({ page }) => {
+  await signIn(page, 'organiser');
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Delivery runs' }).click();
+  await page.getByRole('link').filter({ hasText: 'Packed, ready to go' }).first().click();
+  await expect(page.getByRole('heading', { name: /^Run of / })).toBeVisible();
+  await expect(page.getByText(/Odile Farrant drives/)).toBeVisible();
+  const packed = page.getByTestId('run-stop').filter({ has: page.getByText('Packed', { exact: true }) }).first();
+  await expect(packed.getByLabel('Signed for by')).toBeVisible();
+  await expect(packed.getByRole('button', { name: 'Mark delivered' })).toBeVisible();
+  await expect(page.getByRole('button', { name: 'Suggest a stop order' })).toHaveCount(0);
+  await shot(page, 'delivery-run-driver');
+});

@@ -140,7 +140,7 @@ export function runRoutes(deps: { sequelize: Sequelize; exportDir: string; publi
       ],
     },
     {
-      method: 'post', path: '/api/runs/:id/stops/:stopId/delivered', access: COORDINATOR, summary: 'Mark a stop delivered, with the count received and who signed',
+      method: 'post', path: '/api/runs/:id/stops/:stopId/delivered', access: STAFF, summary: 'Mark a stop delivered, with the count received and who signed (coordinators, or the run’s driver)',
       handlers: [
         validate({ params: RunStopParamsSchema, body: DeliverSchema }),
         async (req, res) => {
@@ -149,7 +149,7 @@ export function runRoutes(deps: { sequelize: Sequelize; exportDir: string; publi
       ],
     },
     {
-      method: 'delete', path: '/api/runs/:id/stops/:stopId/delivered', access: COORDINATOR, summary: 'Undo a delivery, with the reason',
+      method: 'delete', path: '/api/runs/:id/stops/:stopId/delivered', access: STAFF, summary: 'Undo a delivery, with the reason (coordinators, or the run’s driver)',
       handlers: [
         validate({ params: RunStopParamsSchema, body: UndoSchema }),
         async (req, res) => {

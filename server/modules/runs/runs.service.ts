@@ -260,6 +260,12 @@ async function runForWrite(id: number, transaction: Transaction, version?: numbe
   return run;
 }
 
+/** Delivering is recorded by a coordinator, or by the organiser who drives this run. */
+function mayRecordDelivery(run: Run, actor: Actor) {
+  if (actor.role === 'coordinator' || run.driverId === actor.id) return;
+  throw new HttpError(403, 'Only the driver of this run or a coordinator records what was delivered');
+}
+
 async function stopForWrite(run: Run, stopId: number, transaction: Transaction) {
   const stop = (await RunStop.findOne({
     where: { id: stopId, runId: run.id },
@@ -497,6 +503,7 @@ async function thankMakers(stop: { recipient: Recipient; items: Array<RunBlanket
 export async function deliverStop(sequelize: Sequelize, id: number, stopId: number, body: DeliverBody, actor: Actor, appUrl: string): Promise<RunView> {
   await sequelize.transaction(async (transaction) => {
     const run = await runForWrite(id, transaction);
+    mayRecordDelivery(run, actor);
     const stop = await stopForWrite(run, stopId, transaction);
     if (stop.deliveredAt) throw new HttpError(409, `The blankets for ${stop.recipient.name} were already marked delivered`);
     if (!stop.packedAt) throw new HttpError(409, `Pack the blankets for ${stop.recipient.name} before marking them delivered`);
@@ -526,6 +533,7 @@ export async function deliverStop(sequelize: Sequelize, id: number, stopId: numb
 export async function undeliverStop(sequelize: Sequelize, id: number, stopId: number, reason: string, actor: Actor): Promise<RunView> {
   await sequelize.transaction(async (transaction) => {
     const run = await runForWrite(id, transaction);
+    mayRecordDelivery(run, actor);
     const stop = await stopForWrite(run, stopId, transaction);
     if (!stop.deliveredAt) throw new HttpError(409, `The blankets for ${stop.recipient.name} are not marked delivered`);
     for (const item of stop.items) {

@@ -40,6 +40,8 @@ export default function RunDetailPage() {
   if (run.error) return <QueryError error={run.error} />;
   const r = run.data;
   const canPlan = isCoordinator && r.state !== 'delivered';
+  // The server lets a coordinator, or the organiser driving this run, record what was handed over.
+  const canDeliver = isCoordinator || (me.data?.id !== undefined && me.data.id === r.driver.id);
   const move = (from: number, to: number) => {
     const order = r.stops.map((s) => s.id);
     const [item] = order.splice(from, 1);
@@ -102,7 +104,7 @@ export default function RunDetailPage() {
           <ol className="space-y-4">
             {r.stops.map((s, i) => (
               <li key={s.id}>
-                <StopCard stop={s} index={i} count={r.stops.length} canPlan={canPlan} canDeliver={isCoordinator} busy={change.isPending} onChange={(c) => change.mutate(c)} onMove={move} />
+                <StopCard stop={s} index={i} count={r.stops.length} canPlan={canPlan} canDeliver={canDeliver} busy={change.isPending} onChange={(c) => change.mutate(c)} onMove={move} />
               </li>
             ))}
           </ol>
