@@ -224,6 +224,8 @@ function moverFor(from: BlanketStatus, to: BlanketStatus, maker: User, ctx: Seed
   const move = findMove(from, to);
   if (!move) throw new Error(`The demo plans an impossible move ${from} → ${to}`);
   if (move.by.includes('maker')) return maker;
+  // The demo's delivered run was driven and recorded by the coordinator.
+  if (move.via === 'delivery') return ctx.users.coordinator;
   return move.by.includes('organiser') ? ctx.users.organiser : ctx.users.coordinator;
 }
 
