@@ -46,23 +46,34 @@ test('registration names what is wrong', async ({ page }) => {
   await expect(page.getByText('Use at least 15 characters; a few words in a row work well')).toBeVisible();
 });
 
-/** Asks for a reset link for `email` and reads it on the Mail page as `reader`, who must be its addressee. */
+/** Links already handed out by `resetLinkFor`: each works once, and a newer request replaces an older one. */
+const spent = new Set<string>();
+
+/**
+ * Asks for a reset link for `email` and reads it on the Mail page as `reader`, who must be its addressee.
+ * Messages are listed newest first; the one carrying a link not seen before is this request's.
+ */
 async function resetLinkFor(page: Page, reader: Page, email: string): Promise<string> {
   await reader.goto('/mail');
   await expect(reader.getByRole('heading', { name: 'Mail', level: 1 })).toBeVisible();
   const mine = reader.getByRole('list', { name: 'Messages' }).getByRole('button', { name: new RegExp(`Reset your Kindloop password.*to ${email}`) });
-  const before = await mine.count();
   await page.goto('/forgot-password');
   await page.getByLabel('E-mail').fill(email);
   await page.getByRole('button', { name: 'Send the link' }).click();
   await expect(page.getByText('Check your inbox')).toBeVisible();
-  // Newest first: wait for this request's message, not an earlier one whose link is spent.
-  await expect(mine).toHaveCount(before + 1, { timeout: 20_000 });
-  await mine.first().click();
-  const link = reader.getByRole('link', { name: /reset-password\?token=/ }).first();
-  await expect(link).toBeVisible();
-  const href = (await link.getAttribute('href'))!;
-  return new URL(href).pathname + new URL(href).search;
+  let fresh = '';
+  await expect(async () => {
+    await reader.reload();
+    await expect(mine.first()).toBeVisible({ timeout: 2_000 });
+    // The list can still shift as the unsent list above it loads: the newest must be the one open.
+    await mine.first().click();
+    await expect(mine.first()).toHaveAttribute('aria-current', 'true', { timeout: 1_000 });
+    const href = await reader.getByRole('link', { name: /reset-password\?token=/ }).first().getAttribute('href', { timeout: 2_000 });
+    expect(href && !spent.has(href), 'a link not handed out before').toBe(true);
+    fresh = href!;
+  }).toPass({ timeout: 30_000 });
+  spent.add(fresh);
+  return new URL(fresh).pathname + new URL(fresh).search;
 }
 
 async function setPassword(page: Page, path: string, password: string) {
