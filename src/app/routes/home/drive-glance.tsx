@@ -352,75 +352,77 @@ function Waiting({ g }: { g: DriveGlance }) {
   );
 }
 
+/** A side card of the page: a heading with its icon, the list (or what stands in for it), and a link to the full page. */
+function SideCard({ id, icon: Icon, title, empty, footer, children }: { id: string; icon: typeof Truck; title: string; empty: ReactNode | null; footer: ReactNode; children: ReactNode }) {
+  return (
+    <section aria-labelledby={id}>
+      <Card className="h-full">
+        <div className="mb-3 flex items-center gap-3">
+          <Icon className="size-7 text-heather-700" aria-hidden />
+          <h2 id={id} className="text-2xl font-bold">{title}</h2>
+        </div>
+        {empty ?? <ul className="space-y-3">{children}</ul>}
+        <p className="mt-4">{footer}</p>
+      </Card>
+    </section>
+  );
+}
+
 function Runs({ g }: { g: DriveGlance }) {
   const { items, total } = g.upcomingRuns;
   return (
-    <section aria-labelledby="runs-heading">
-      <Card className="h-full">
-        <div className="mb-3 flex items-center gap-3">
-          <Truck className="size-7 text-heather-700" aria-hidden />
-          <h2 id="runs-heading" className="text-2xl font-bold">Upcoming runs</h2>
-        </div>
-        {items.length === 0 ? (
-          <p className="text-ink-soft">No delivery run is planned. <Link to="/runs">Plan one on Delivery runs</Link>.</p>
-        ) : (
-          <ul className="space-y-3">
-            {items.map((r) => (
-              <li key={r.id}>
-                <Link to={glanceLinks.run(r.id)} className="block rounded-xl border border-oat-200 p-3 text-ink no-underline hover:border-heather-300 hover:bg-heather-50">
-                  <span className="flex flex-wrap items-center justify-between gap-2">
-                    <span className="text-lg font-bold">{formatDay(r.runDate, true)}</span>
-                    <RunStateBadge state={r.state} />
-                  </span>
-                  <span className="block text-ink-soft">
-                    {r.driver.name} from {r.startSite.name} · {plural(r.stopCount, 'stop')} · {plural(r.blanketCount, 'blanket')}
-                  </span>
-                </Link>
-              </li>
-            ))}
-          </ul>
-        )}
-        <p className="mt-4">
-          <Link to="/runs" className="inline-flex items-center gap-1 font-bold">
-            {total > items.length ? `All ${total} upcoming runs` : 'All delivery runs'} <ArrowRight className="size-4" aria-hidden />
+    <SideCard
+      id="runs-heading"
+      icon={Truck}
+      title="Upcoming runs"
+      empty={items.length === 0 ? <p className="text-ink-soft">No delivery run is planned. <Link to="/runs">Plan one on Delivery runs</Link>.</p> : null}
+      footer={
+        <Link to="/runs" className="inline-flex items-center gap-1 font-bold">
+          {total > items.length ? `All ${total} upcoming runs` : 'All delivery runs'} <ArrowRight className="size-4" aria-hidden />
+        </Link>
+      }
+    >
+      {items.map((r) => (
+        <li key={r.id}>
+          <Link to={glanceLinks.run(r.id)} className="block rounded-xl border border-oat-200 p-3 text-ink no-underline hover:border-heather-300 hover:bg-heather-50">
+            <span className="flex flex-wrap items-center justify-between gap-2">
+              <span className="text-lg font-bold">{formatDay(r.runDate, true)}</span>
+              <RunStateBadge state={r.state} />
+            </span>
+            <span className="block text-ink-soft">
+              {r.driver.name} from {r.startSite.name} · {plural(r.stopCount, 'stop')} · {plural(r.blanketCount, 'blanket')}
+            </span>
           </Link>
-        </p>
-      </Card>
-    </section>
+        </li>
+      ))}
+    </SideCard>
   );
 }
 
 function Exports({ g }: { g: DriveGlance }) {
   const { items, total } = g.recentExports;
   return (
-    <section aria-labelledby="exports-heading">
-      <Card className="h-full">
-        <div className="mb-3 flex items-center gap-3">
-          <FileSpreadsheet className="size-7 text-heather-700" aria-hidden />
-          <h2 id="exports-heading" className="text-2xl font-bold">Recent exports</h2>
-        </div>
-        {items.length === 0 ? (
-          <p className="text-ink-soft">No delivery list has been exported yet.</p>
-        ) : (
-          <ul className="space-y-3">
-            {items.map((e) => (
-              <li key={e.id} className="rounded-xl border border-oat-200 p-3">
-                <span className="block font-bold">{e.title}</span>
-                <span className="block text-ink-soft">
-                  {plural(e.rows, 'row')} · {formatMoment(e.createdAt)}
-                  {e.createdBy ? ` · ${e.createdBy.name}` : ''}
-                </span>
-              </li>
-            ))}
-          </ul>
-        )}
-        <p className="mt-4">
-          <Link to="/exports" className="inline-flex items-center gap-1 font-bold">
-            {total > 0 ? `All ${plural(total, 'export')}, to download again` : 'Exports'} <ArrowRight className="size-4" aria-hidden />
-          </Link>
-        </p>
-      </Card>
-    </section>
+    <SideCard
+      id="exports-heading"
+      icon={FileSpreadsheet}
+      title="Recent exports"
+      empty={items.length === 0 ? <p className="text-ink-soft">No delivery list has been exported yet.</p> : null}
+      footer={
+        <Link to="/exports" className="inline-flex items-center gap-1 font-bold">
+          {total > 0 ? `All ${plural(total, 'export')}, to download again` : 'Exports'} <ArrowRight className="size-4" aria-hidden />
+        </Link>
+      }
+    >
+      {items.map((e) => (
+        <li key={e.id} className="rounded-xl border border-oat-200 p-3">
+          <span className="block font-bold">{e.title}</span>
+          <span className="block text-ink-soft">
+            {plural(e.rows, 'row')} · {formatMoment(e.createdAt)}
+            {e.createdBy ? ` · ${e.createdBy.name}` : ''}
+          </span>
+        </li>
+      ))}
+    </SideCard>
   );
 }
 
