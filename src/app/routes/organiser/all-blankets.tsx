@@ -1,5 +1,5 @@
-import { Link, useSearchParams } from 'react-router-dom';
-import { Filter, Layers, ScanLine } from 'lucide-react';
+import { useSearchParams } from 'react-router-dom';
+import { Layers, ScanLine } from 'lucide-react';
 import { PageHeader } from '@/components/ui/page-header';
 import { ButtonLink } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -7,10 +7,10 @@ import { formatDay } from '@/components/ui/format-day';
 import { BlanketsTable } from '@/features/blankets/components/blankets-table';
 import { sizeLabel } from '@/features/blankets/components/labels';
 import { useNeeds } from '@/features/needs/api/get-needs';
+import { ListFilterNote, dayParam, idParam, lastDayBefore } from '@/features/progress/components/list-filter-note';
 import { GLANCE_STEPS, STEP_LABELS, STEP_MEANS, type GlanceStep } from '@shared/drive/glance';
 
 const asStep = (v: string | null): GlanceStep | undefined => (GLANCE_STEPS as readonly string[]).includes(v ?? '') ? (v as GlanceStep) : undefined;
-const asDay = (v: string | null) => (v && /^\d{4}-\d{2}-\d{2}$/.test(v) ? v : undefined);
 
 /**
  * The filters the drive at a glance links here with, read from the address so a figure and its list
@@ -18,12 +18,11 @@ const asDay = (v: string | null) => (v && /^\d{4}-\d{2}-\d{2}$/.test(v) ? v : un
  */
 function useGlanceFilters() {
   const [params] = useSearchParams();
-  const needId = Number(params.get('needId'));
   const reached = asStep(params.get('reached'));
-  const from = asDay(params.get('from'));
-  const to = asDay(params.get('to'));
+  const from = dayParam(params.get('from'));
+  const to = dayParam(params.get('to'));
   const window = reached && from && to ? { reached, from, to } : {};
-  return { step: asStep(params.get('step')), needId: Number.isInteger(needId) && needId > 0 ? needId : undefined, ...window };
+  return { step: asStep(params.get('step')), needId: idParam(params.get('needId')), ...window };
 }
 
 function FilterNote({ f }: { f: ReturnType<typeof useGlanceFilters> }) {
@@ -32,22 +31,10 @@ function FilterNote({ f }: { f: ReturnType<typeof useGlanceFilters> }) {
   const parts: string[] = [];
   if (f.step) parts.push(`${STEP_LABELS[f.step].toLowerCase()} now: ${STEP_MEANS[f.step]}`);
   if (f.reached && f.from && f.to) {
-    const last = new Date(Date.parse(`${f.to}T00:00:00Z`) - 86_400_000).toISOString().slice(0, 10);
-    parts.push(`that reached “${STEP_LABELS[f.reached].toLowerCase()}” from ${formatDay(f.from)} to ${formatDay(last)}`);
+    parts.push(`that reached “${STEP_LABELS[f.reached].toLowerCase()}” from ${formatDay(f.from)} to ${formatDay(lastDayBefore(f.to))}`);
   }
   if (f.needId) parts.push(need ? `for ${need.recipient.name}, ${sizeLabel(need.sizeCategory).toLowerCase()}` : 'for one need');
-  if (parts.length === 0) return null;
-  return (
-    <div className="flex flex-wrap items-center gap-3 rounded-xl border border-heather-300 bg-heather-50 p-4" data-testid="list-filter">
-      <Filter className="size-5 shrink-0 text-heather-700" aria-hidden />
-      <p className="flex-1">
-        <span className="font-bold">Showing blankets </span>
-        {parts.join(', ')}.
-      </p>
-      <Link to="/drive" className="font-bold">Back to the drive at a glance</Link>
-      <Link to="/all-blankets" className="font-bold">Show all blankets</Link>
-    </div>
-  );
+  return <ListFilterNote noun="blankets" parts={parts} allTo="/all-blankets" />;
 }
 
 /** Every blanket of the drive, for the organisers and the coordinator: find one, see where it is up to. */

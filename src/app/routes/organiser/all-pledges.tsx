@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { ChevronLeft, ChevronRight, ClipboardList, Filter } from 'lucide-react';
+import { ChevronLeft, ChevronRight, ClipboardList } from 'lucide-react';
 import { PageHeader } from '@/components/ui/page-header';
 import { Button } from '@/components/ui/button';
 import { Badge } from '@/components/ui/badge';
@@ -10,10 +10,10 @@ import { QueryError } from '@/components/ui/query-error';
 import { formatDay } from '@/components/ui/format-day';
 import { usePledges } from '@/features/pledges/api/get-pledges';
 import { sizeLabel } from '@/features/blankets/components/labels';
+import { ListFilterNote, dayParam, idParam, lastDayBefore } from '@/features/progress/components/list-filter-note';
 import { pageCount } from '@shared/schemas/page';
 import type { PledgeStatus } from '@shared/schemas/pledge';
 
-const asDay = (v: string | null) => (v && /^\d{4}-\d{2}-\d{2}$/.test(v) ? v : undefined);
 const STATUS_WORDS: Record<PledgeStatus, string> = { active: 'Active', fulfilled: 'Made', cancelled: 'Cancelled' };
 const PAGE_SIZE = 25;
 
@@ -23,11 +23,10 @@ const PAGE_SIZE = 25;
  */
 export default function AllPledgesPage() {
   const [params] = useSearchParams();
-  const needId = Number(params.get('needId'));
-  const from = asDay(params.get('from'));
-  const to = asDay(params.get('to'));
+  const from = dayParam(params.get('from'));
+  const to = dayParam(params.get('to'));
   const filters = {
-    needId: Number.isInteger(needId) && needId > 0 ? needId : undefined,
+    needId: idParam(params.get('needId')),
     promising: params.get('promising') === 'true' ? true : undefined,
     ...(from && to ? { from, to } : {}),
   };
@@ -37,24 +36,13 @@ export default function AllPledgesPage() {
   const parts: string[] = [];
   if (filters.promising) parts.push('still standing (active or made)');
   if (filters.from && filters.to) {
-    const last = new Date(Date.parse(`${filters.to}T00:00:00Z`) - 86_400_000).toISOString().slice(0, 10);
-    parts.push(`made from ${formatDay(filters.from)} to ${formatDay(last)}`);
+    parts.push(`made from ${formatDay(filters.from)} to ${formatDay(lastDayBefore(filters.to))}`);
   }
   if (filters.needId) parts.push(first?.need ? `for ${first.need.recipient.name}, ${sizeLabel(first.need.sizeCategory).toLowerCase()}` : 'for one need');
   return (
     <div className="space-y-6">
       <PageHeader title="All pledges" lead="What the makers have promised, newest first: who, for which need, how many and by when." />
-      {parts.length > 0 && (
-        <div className="flex flex-wrap items-center gap-3 rounded-xl border border-heather-300 bg-heather-50 p-4" data-testid="list-filter">
-          <Filter className="size-5 shrink-0 text-heather-700" aria-hidden />
-          <p className="flex-1">
-            <span className="font-bold">Showing pledges </span>
-            {parts.join(', ')}.
-          </p>
-          <Link to="/drive" className="font-bold">Back to the drive at a glance</Link>
-          <Link to="/all-pledges" className="font-bold">Show all pledges</Link>
-        </div>
-      )}
+      <ListFilterNote noun="pledges" parts={parts} allTo="/all-pledges" />
       {pledges.isPending ? (
         <Loading />
       ) : pledges.error ? (
