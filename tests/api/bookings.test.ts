@@ -3,7 +3,7 @@ import type { AddressInfo } from 'node:net';
 import type { InferCreationAttributes } from 'sequelize';
 import ical from 'node-ical';
 import { DateTime } from 'luxon';
-import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
+import { makeTestApp, openEveryDayDesk, signedIn, type Client, type TestApp } from './test-app';
 import { Blanket } from '../../server/db/models/blanket';
 import { BlanketEvent } from '../../server/db/models/blanket-event';
 import { Booking } from '../../server/db/models/booking';
@@ -69,20 +69,9 @@ beforeAll(async () => {
   volunteer = await signedIn(t.app, 'volunteer');
   maker = (await User.findOne({ where: { email: 'volunteer@example.org' } }))!;
   shelterId = (await Recipient.findOne({ where: { kind: 'family-shelter' } }))!.id;
-  // A test desk open every day, so there are slots whatever day the suite runs.
-  const every = [{ from: '09:00', to: '12:00' }, { from: '13:00', to: '17:00' }];
-  const res = await coordinator.post('/api/sites', {
-    name: 'Test desk',
-    address: '1 Test Row, Thimbleford',
-    lat: null,
-    lng: null,
-    openingHours: { mon: every, tue: every, wed: every, thu: every, fri: every, sat: every, sun: every },
-    slotMinutes: 30,
-    slotCapacity: 3,
-    closures: [{ from: day(10), to: day(12), note: 'Closed for painting' }],
-  });
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
-  desk = (await Site.findByPk(res.body.site.id))!;
+  desk = (await Site.findByPk(
+    await openEveryDayDesk(coordinator, { name: 'Test desk', address: '1 Test Row, Thimbleford', closures: [{ from: day(10), to: day(12), note: 'Closed for painting' }] }),
+  ))!;
 });
 afterAll(async () => t.close());
 

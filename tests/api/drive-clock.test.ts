@@ -1,6 +1,6 @@
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import type { InferCreationAttributes } from 'sequelize';
-import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
+import { makeTestApp, openEveryDayDesk, signedIn, type Client, type TestApp } from './test-app';
 import { Blanket } from '../../server/db/models/blanket';
 import { BlanketEvent } from '../../server/db/models/blanket-event';
 import { Booking } from '../../server/db/models/booking';
@@ -63,19 +63,7 @@ beforeAll(async () => {
   volunteer = await signedIn(t.app, 'volunteer');
   maker = (await User.findOne({ where: { email: 'volunteer@example.org' } }))!;
   shelterId = (await Recipient.findOne({ where: { kind: 'family-shelter' } }))!.id;
-  const every = [{ from: '09:00', to: '12:00' }, { from: '13:00', to: '17:00' }];
-  const res = await coordinator.post('/api/sites', {
-    name: 'Clock desk',
-    address: '2 Test Row, Thimbleford',
-    lat: null,
-    lng: null,
-    openingHours: { mon: every, tue: every, wed: every, thu: every, fri: every, sat: every, sun: every },
-    slotMinutes: 30,
-    slotCapacity: 3,
-    closures: [],
-  });
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
-  desk = (await Site.findByPk(res.body.site.id))!;
+  desk = (await Site.findByPk(await openEveryDayDesk(coordinator, { name: 'Clock desk', address: '2 Test Row, Thimbleford' })))!;
 });
 afterEach(async () => {
   setClock(null);

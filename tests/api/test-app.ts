@@ -1,3 +1,4 @@
+import { expect } from 'vitest';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -95,4 +96,24 @@ export async function signedIn(app: KindloopApp, who: 'volunteer' | 'organiser' 
   const res = await c.login(email);
   if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return c;
+}
+
+/**
+ * A drop-off desk open every day, 09:00–12:00 and 13:00–17:00 in half-hour slots for three visits, so
+ * there are slots whatever day the suite runs; made by the coordinator through the API.
+ */
+export async function openEveryDayDesk(coordinator: Client, site: { name: string; address: string; closures?: Array<{ from: string; to: string; note: string }> }) {
+  const every = [{ from: '09:00', to: '12:00' }, { from: '13:00', to: '17:00' }];
+  const res = await coordinator.post('/api/sites', {
+    name: site.name,
+    address: site.address,
+    lat: null,
+    lng: null,
+    openingHours: { mon: every, tue: every, wed: every, thu: every, fri: every, sat: every, sun: every },
+    slotMinutes: 30,
+    slotCapacity: 3,
+    closures: site.closures ?? [],
+  });
+  expect(res.status, JSON.stringify(res.body)).toBe(201);
+  return res.body.site.id as number;
 }
