@@ -56,7 +56,10 @@ test('a coordinator adds a drop-off site by clicking the map', async ({ page }) 
   await page.getByRole('button', { name: 'Add a site' }).click();
   await page.getByLabel('Name').fill('Orchard Rise Surgery');
   await page.getByLabel('Address').fill('8 Orchard Rise, Thimbleford');
-  await page.getByRole('group', { name: "Map: click to place the site's pin" }).click({ position: { x: 120, y: 80 } });
+  const siteMap = page.getByRole('group', { name: "Map: click to place the site's pin" });
+  // The map itself loads after the page: a click on its placeholder would place nothing.
+  await expect(siteMap.locator('.leaflet-container')).toBeVisible({ timeout: 20_000 });
+  await siteMap.click({ position: { x: 120, y: 80 } });
   await expect(page.getByLabel('Latitude')).not.toHaveValue('');
   await page.getByRole('button', { name: 'Add the site' }).click();
   await expect(page.getByRole('heading', { name: 'Orchard Rise Surgery' })).toBeVisible();

@@ -53,6 +53,8 @@ test('a coordinator places a new recipient\'s pin by clicking the map', async ({
   await page.goto('/recipients/new');
   const map = page.getByRole('group', { name: "Map: click to place this recipient's pin" });
   await expect(map).toBeVisible({ timeout: 20_000 });
+  // The map itself loads after the page: a click on its placeholder would place nothing.
+  await expect(map.locator('.leaflet-container')).toBeVisible({ timeout: 20_000 });
   await expect(page.getByLabel('Latitude')).toHaveValue('');
   await map.scrollIntoViewIfNeeded();
   const box = (await map.boundingBox())!;
