@@ -1,4 +1,5 @@
 import type { BlanketFields, Feature, Fibre, Population } from '../schemas/blanket';
+import { FEATURES } from '../schemas/blanket-values';
 import type {
   GuidelineCheckResult,
   GuidelineReason,
@@ -30,17 +31,6 @@ export interface CheckOptions {
   recipientId?: number;
 }
 
-/** Trims a maker can take off at home. Open lace is part of the fabric, so it is not here. */
-export const REMOVABLE_FEATURES: readonly Feature[] = [
-  'fringe',
-  'tassels',
-  'pompoms',
-  'buttons',
-  'beads',
-  'applique',
-  'ribbons',
-];
-
 /** Keeps a reading that lands exactly on a bound inside it despite binary fractions (55 × 1.05). */
 const EPSILON_CM = 1e-9;
 
@@ -53,6 +43,9 @@ const FIX_AT_HOME: Partial<Record<Feature, string>> = {
   applique: 'Unpick the appliqué and weave the ends in securely.',
   ribbons: 'Draw the ribbon out and weave the ends in securely.',
 };
+
+/** Trims a maker can take off at home: those with a fix above. Open lace is part of the fabric, so it is not one. */
+export const REMOVABLE_FEATURES: readonly Feature[] = FEATURES.filter((f) => FIX_AT_HOME[f] !== undefined);
 
 type Audience = 'infant' | 'elder' | 'general';
 const audienceOf = (p: Population): Audience =>

@@ -1,4 +1,5 @@
-import { FEATURES, type Feature, type Fibre, type Population, type SizeCategory } from '../schemas/blanket';
+import { FEATURES } from '../schemas/blanket-values';
+import type { Feature, Fibre, Population, SizeCategory } from '../schemas/blanket';
 import type { GuidelineSet } from '../schemas/guidelines';
 import { sizeCategoryRow } from './size-categories';
 

@@ -1,4 +1,4 @@
-import { FEATURES, FIBRES } from '../schemas/blanket';
+import { FEATURES, FIBRES } from '../schemas/blanket-values';
 import type { GuidelineSet } from '../schemas/guidelines';
 import { capitalise, featureLabel, fibreLabel, formatCm, formatIn, formatYarnWeights, joinWords } from './wording';
 

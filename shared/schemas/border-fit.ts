@@ -3,14 +3,9 @@ import { ROW_TYPES, type RowType } from '../border/row-ends';
 import { FIT_STRATEGIES } from '../border/fit';
 import { ROUND_MODES } from '../border/round';
 import { BODY_STITCHES_FOR_CHAIN } from '../sizing/gauge';
+import { MAX_CORNER_STITCHES, MAX_EDGE_STITCHES, MAX_MULTIPLE, MAX_OFFSET, MAX_PATTERN_ROWS } from './border-fit-values';
 
-/** Past this an edge is a typing mistake, not a blanket: 2,000 stitches is several metres. */
-export const MAX_EDGE_STITCHES = 2000;
-export const MAX_MULTIPLE = 60;
-export const MAX_OFFSET = 100;
-export const MAX_PATTERN_ROWS = 12;
-/** More than this in one corner stitch would ruffle whatever the border. */
-export const MAX_CORNER_STITCHES = 9;
+export { MAX_CORNER_STITCHES, MAX_EDGE_STITCHES, MAX_MULTIPLE, MAX_OFFSET, MAX_PATTERN_ROWS };
 
 const wholeCount = (field: string, noun: 'stitches' | 'rows') =>
   z

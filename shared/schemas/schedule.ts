@@ -1,19 +1,13 @@
 import { z } from 'zod';
 import { IANAZone } from 'luxon';
+import { EMPTY_HOURS, WEEKDAYS, WEEKDAY_LABELS, minutesOfDay, type Weekday } from './schedule-values';
 
-/** ISO weekdays in order, Monday first (ISO 8601 numbers them 1–7 the same way). */
-export const WEEKDAYS = ['mon', 'tue', 'wed', 'thu', 'fri', 'sat', 'sun'] as const;
-export type Weekday = (typeof WEEKDAYS)[number];
-export const WEEKDAY_LABELS: Record<Weekday, string> = {
-  mon: 'Monday', tue: 'Tuesday', wed: 'Wednesday', thu: 'Thursday', fri: 'Friday', sat: 'Saturday', sun: 'Sunday',
-};
+export { EMPTY_HOURS, WEEKDAYS, WEEKDAY_LABELS, minutesOfDay, type Weekday };
 
 /** A wall-clock time in the drive's zone, 24-hour "HH:MM". */
 export const ClockTimeSchema = z
   .string({ error: 'A time must be text like 09:30' })
   .regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'A time looks like 09:30 (24-hour clock)');
-
-export const minutesOfDay = (hhmm: string): number => Number(hhmm.slice(0, 2)) * 60 + Number(hhmm.slice(3, 5));
 
 export const OpeningSpanSchema = z
   .object({ from: ClockTimeSchema, to: ClockTimeSchema })
@@ -72,8 +66,6 @@ export interface SiteSchedule {
   slotMinutes: number;
   slotCapacity: number;
 }
-
-export const EMPTY_HOURS: OpeningHours = { mon: [], tue: [], wed: [], thu: [], fri: [], sat: [], sun: [] };
 
 /** An IANA time-zone name that the date library (and so the tz database it reads) knows. */
 export const TimeZoneSchema = z

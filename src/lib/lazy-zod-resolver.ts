@@ -1,3 +1,4 @@
+import { useEffect, useState } from 'react';
 import type { FieldValues, Resolver } from 'react-hook-form';
 import type * as z4 from 'zod/v4/core';
 
@@ -6,17 +7,49 @@ import type * as z4 from 'zod/v4/core';
  * waiting for the schema library (about 24 kB gzipped) and the schema is there long before the
  * first submit. A load that failed (the connection dropped) is tried again on the next call.
  */
-export function preload<T>(load: () => Promise<T>): () => Promise<T> {
+export function preload<T>(load: () => Promise<T>): Preloaded<T> {
   let ready: Promise<T> | null = null;
   const start = () => {
     const p = load();
-    p.catch(() => {
-      if (ready === p) ready = null;
-    });
+    p.then(
+      (value) => {
+        get.loaded = { value };
+      },
+      () => {
+        if (ready === p) ready = null;
+      },
+    );
     return p;
   };
+  const get: Preloaded<T> = () => (ready ??= start());
   ready = start();
-  return () => (ready ??= start());
+  return get;
+}
+
+/** A module being loaded by `preload`; `loaded` is set once it has arrived. */
+export interface Preloaded<T> {
+  (): Promise<T>;
+  loaded?: { value: T };
+}
+
+/**
+ * The preloaded module once it has arrived (undefined until then), for checks that run while a
+ * person types: the page paints and works first, the checks join in a moment later.
+ */
+export function usePreloaded<T>(get: Preloaded<T>): T | undefined {
+  const [loaded, setLoaded] = useState(() => get.loaded);
+  useEffect(() => {
+    if (loaded) return;
+    let live = true;
+    get().then(
+      (value) => live && setLoaded({ value }),
+      () => {},
+    );
+    return () => {
+      live = false;
+    };
+  }, [get, loaded]);
+  return (loaded ?? get.loaded)?.value;
 }
 
 /**

@@ -162,6 +162,10 @@ describe('check: features', () => {
     });
   });
 
+  it('every trim but open lace can be taken off at home (common practice, no published source)', () => {
+    expect([...REMOVABLE_FEATURES].sort()).toEqual(['applique', 'beads', 'buttons', 'fringe', 'pompoms', 'ribbons', 'tassels']);
+  });
+
   it.each(REMOVABLE_FEATURES.map((f) => [f]))('%s is removable: a mend with a fix', (feature) => {
     const result = check(good({ features: [feature] }), ward());
     expect(result.verdict).toBe('mend');

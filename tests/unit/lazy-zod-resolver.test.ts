@@ -46,6 +46,15 @@ describe('preload', () => {
     await expect(get()).resolves.toBe('schema');
     expect(calls).toBe(2);
   });
+
+  it('holds the module once it has arrived, for checks that run while a person types', async () => {
+    let release: (v: string) => void = () => {};
+    const get = preload(() => new Promise<string>((resolve) => (release = resolve)));
+    expect(get.loaded).toBeUndefined();
+    release('schema');
+    await get();
+    expect(get.loaded).toEqual({ value: 'schema' });
+  });
 });
 
 it('the zod-free pledge limit is the one the schema enforces', () => {

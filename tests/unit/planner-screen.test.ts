@@ -7,6 +7,7 @@ import { planBorder } from '@shared/border/plan';
 import { BORDER_LIBRARY, borderById, borderPlanOptions } from '@shared/border/library';
 import { EDGE_ORDER } from '@shared/border/round';
 import { PlanInputSchema } from '@shared/schemas/plan';
+import * as checks from '@shared/schemas/border-fit';
 
 const shell = borderById('five-dc-shell')!;
 const state = (patch: Partial<PlannerState> = {}): PlannerState => ({ ...DEFAULTS, borderDepth: defaultDepth(shell, 'cm'), depthTouched: false, countsTouched: true, ...patch });
@@ -18,7 +19,7 @@ describe('the planner screen state', () => {
   });
 
   it('plans 30 × 23 plain rows with the five-dc shell as the shared engine does', () => {
-    const r = computePlanner(state({ across: '30', rows: '23', rowPreset: 'plain' }));
+    const r = computePlanner(state({ across: '30', rows: '23', rowPreset: 'plain' }), checks);
     expect(r.errors.across).toBeUndefined();
     expect(r.plan?.edges.top).toMatchObject({ change: 3, fitted: 33 });
     expect(r.plan?.edges.right).toMatchObject({ change: 2, fitted: 25 });
@@ -27,13 +28,13 @@ describe('the planner screen state', () => {
 
   it('names the field of a bad count in the words on screen and keeps the text', () => {
     const s = state({ across: '2500', rows: '-3' });
-    const r = computePlanner(s);
+    const r = computePlanner(s, checks);
     expect(r.errors.across).toMatch(/^Stitches across over 2,000/);
     expect(r.errors.rows).toMatch(/^Rows must be at least 1/);
     expect(r.plan).toBeNull();
     expect(s.across).toBe('2500');
-    expect(computePlanner(state({ across: '' })).errors.across).toMatch(/enter/);
-    expect(computePlanner(state({ across: '12.5' })).errors.across).toMatch(/whole number/);
+    expect(computePlanner(state({ across: '' }), checks).errors.across).toMatch(/enter/);
+    expect(computePlanner(state({ across: '12.5' }), checks).errors.across).toMatch(/whole number/);
   });
 
   it('reads a custom row pattern in the chosen terms: UK "dc, tr" is US "sc, dc"', () => {
@@ -45,15 +46,15 @@ describe('the planner screen state', () => {
 
   it('saves only what the server accepts', () => {
     const s = state();
-    const input = toPlanInput(s, computePlanner(s));
+    const input = toPlanInput(s, computePlanner(s, checks));
     expect(input).not.toBeNull();
     expect(PlanInputSchema.safeParse(input).success).toBe(true);
-    expect(toPlanInput(state({ across: 'x' }), computePlanner(state({ across: 'x' })))).toBeNull();
+    expect(toPlanInput(state({ across: 'x' }), computePlanner(state({ across: 'x' }), checks))).toBeNull();
   });
 
   it('estimates yarn and sizes only from a valid swatch', () => {
-    expect(computePlanner(state()).yarn?.totalMetres).toBeGreaterThan(0);
-    const r = computePlanner(state({ gaugeStitches: '0' }));
+    expect(computePlanner(state(), checks).yarn?.totalMetres).toBeGreaterThan(0);
+    const r = computePlanner(state({ gaugeStitches: '0' }), checks);
     expect(r.gauge).toBeNull();
     expect(r.yarn).toBeNull();
     expect(r.errors.gaugeStitches).toMatch(/^Swatch stitches/);
@@ -121,7 +122,7 @@ describe('the blanket drawing', () => {
 describe('one set of counts for the plan, the swatch panel and the yarn estimate', () => {
   it('80 × 100 cm at 15 sts and 11 rows per 10 cm: the plan and the yarn estimate use the 111 × 103 the swatch panel gives', () => {
     const s = initialPlannerState();
-    const r = computePlanner(s);
+    const r = computePlanner(s, checks);
     expect(r.sizing).toMatchObject({ stitches: 111, rows: 103 });
     expect([r.across, rowCount(r.rows!)]).toEqual([111, 103]);
     // The yarn is worked out for the same body the swatch panel describes.
@@ -133,16 +134,57 @@ describe('one set of counts for the plan, the swatch panel and the yarn estimate
   });
 
   it('counts the maker typed are kept, said to be their own, and the yarn follows them', () => {
-    const s = followSwatch({ ...initialPlannerState(), across: '42', rows: '31', countsTouched: true });
-    const r = computePlanner(s);
+    const s = followSwatch({ ...initialPlannerState(), across: '42', rows: '31', countsTouched: true }, checks);
+    const r = computePlanner(s, checks);
     expect(r.across).toBe(42);
     expect(countsInUse(s, r)).toEqual({ source: 'own', matchesSwatch: false });
     expect(r.sizes!.body.width).toBeLessThan(r.sizing!.body.width);
   });
 
   it('until the maker types counts, changing the swatch changes the plan', () => {
-    const s = followSwatch({ ...initialPlannerState(), gaugeStitches: '20' });
-    expect(computePlanner(s).across).toBe(computePlanner(s).sizing!.stitches);
+    const s = followSwatch({ ...initialPlannerState(), gaugeStitches: '20' }, checks);
+    expect(computePlanner(s, checks).across).toBe(computePlanner(s, checks).sizing!.stitches);
     expect(Number(s.across)).toBeGreaterThan(111);
+  });
+});
+
+describe('before the checks have loaded', () => {
+  const figures = (r: ReturnType<typeof computePlanner>) => ({ across: r.across, rows: r.rows, plan: r.plan, gauge: r.gauge, sizing: r.sizing, sizes: r.sizes, yarn: r.yarn });
+
+  it('draws the same plan, sizes and yarn as the checked planner for whatever the checks accept', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 600 }),
+        fc.integer({ min: 1, max: 600 }),
+        fc.constantFrom('hdc' as const, 'sc-dc' as const, 'plain' as const),
+        fc.constantFrom(...BORDER_LIBRARY.map((b) => b.id)),
+        fc.constantFrom('cm' as const, 'in' as const),
+        fc.integer({ min: 5, max: 40 }),
+        fc.integer({ min: 5, max: 40 }),
+        fc.boolean(),
+        (across, rows, rowPreset, borderId, unit, gaugeStitches, gaugeRows, countsTouched) => {
+          const s = state({ across: String(across), rows: String(rows), rowPreset, borderId, unit, gaugeStitches: String(gaugeStitches), gaugeRows: String(gaugeRows), countsTouched });
+          const checked = computePlanner(s, checks);
+          const unchecked = computePlanner(s, null);
+          // Every figure the checked planner shows, the unchecked one shows the same.
+          const a = figures(unchecked);
+          const b = figures(checked);
+          for (const key of Object.keys(b) as Array<keyof typeof b>) if (b[key] != null) expect(a[key]).toEqual(b[key]);
+          if (checked.sizing) expect(followSwatch(s, null)).toEqual(followSwatch(s, checks));
+        },
+      ),
+      { numRuns: 200 },
+    );
+    expect(computePlanner(initialPlannerState(), null).plan).not.toBeNull();
+  });
+
+  it('names only a blank field, works from nothing it cannot use, and leaves the rest to the checks', () => {
+    const blank = computePlanner(state({ across: '' }), null);
+    expect(blank.errors.across).toMatch(/enter/);
+    const bad = computePlanner(state({ across: '2500', rows: '-3', gaugeStitches: '0' }), null);
+    expect(bad.plan).toBeNull();
+    expect(bad.gauge).toBeNull();
+    expect(bad.errors).toEqual({});
+    expect(computePlanner(state({ across: '12.5' }), null).across).toBeUndefined();
   });
 });

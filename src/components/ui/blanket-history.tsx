@@ -1,19 +1,11 @@
 import { STATUS_LABELS } from '@shared/blankets/status';
 import type { BlanketStatus } from '@shared/schemas/blanket';
+import type { BlanketHistoryEntry } from '@shared/schemas/intake-views';
 import { formatMoment } from './format-day';
 import { useDriveClock } from '@/lib/drive-clock';
 
 /** One step of a blanket's history as both the maker's page and the intake page receive it. */
-export interface HistoryEvent {
-  id: number;
-  kind: string;
-  fromStatus: string | null;
-  toStatus: string | null;
-  reason: string | null;
-  data: unknown;
-  createdAt: string;
-  actor: { id: number; name: string } | null;
-}
+export type HistoryEvent = BlanketHistoryEntry;
 
 const label = (s: string | null) => (s && s in STATUS_LABELS ? STATUS_LABELS[s as BlanketStatus] : null);
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;

@@ -15,6 +15,7 @@ import { useUpdateBlanket } from '@/features/blankets/api/update-blanket';
 import { BlanketForm } from '@/features/blankets/components/blanket-form';
 import { toUpdatePayload, type BlanketFormValues } from '@/features/blankets/components/blanket-form-schema';
 import type { RecipientBrief } from '@shared/schemas/pledge';
+import { pickBlanketFields } from '@shared/schemas/blanket-values';
 
 /** Correcting the log while the blanket is still with its maker; the self-check runs again as they change it. */
 export default function EditBlanketPage() {
@@ -45,19 +46,13 @@ export default function EditBlanketPage() {
   const own = (pledges.data ?? []).filter((p) => p.id === b.pledgeId);
   const others: RecipientBrief[] = [];
   for (const n of needs.data ?? []) if (!others.some((r) => r.id === n.recipient.id)) others.push(n.recipient);
+  const { widthCm, lengthCm, ...checked } = pickBlanketFields(b);
   const defaults: BlanketFormValues = {
     pledgeId: b.pledgeId ?? 0,
     unit: 'cm',
-    width: b.widthCm,
-    length: b.lengthCm,
-    yarnWeight: b.yarnWeight,
-    fibres: b.fibres,
-    features: b.features,
-    machineWashable: b.machineWashable,
-    dryerSafe: b.dryerSafe,
-    smokeFree: b.smokeFree,
-    petFree: b.petFree,
-    newYarn: b.newYarn,
+    width: widthCm,
+    length: lengthCm,
+    ...checked,
     colours: b.colours,
     bodyStitch: b.bodyStitch,
     borderId: b.borderId ?? '',

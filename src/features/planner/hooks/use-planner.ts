@@ -4,12 +4,22 @@ import { planBorder, type BorderPlan } from '@shared/border/plan';
 import { rowCount, type BodyRows, type RowType } from '@shared/border/row-ends';
 import type { FitStrategy } from '@shared/border/fit';
 import type { RoundMode } from '@shared/border/round';
-import { BorderFitRequestSchema, GaugeSchema, SizeFromGaugeRequestSchema, YarnEstimateRequestSchema } from '@shared/schemas/border-fit';
+import type * as BorderFitSchemas from '@shared/schemas/border-fit';
+import { MAX_EDGE_STITCHES } from '@shared/schemas/border-fit-values';
 import type { PlanInput, PlanInputDraft } from '@shared/schemas/plan';
 import { bodyCountsFromGauge, finishedSizeFromCounts, type BodyCounts, type BodyStitch, type Gauge, type Size } from '@shared/sizing/gauge';
 import { estimateYarn, type YarnEstimate } from '@shared/sizing/yarn-estimate';
 import { UK_TO_US, US_TO_UK } from '@shared/sizing/stitch-names';
 import { fromCm, toCm, type LengthUnit, type YarnUnit } from '@shared/sizing/units';
+import { preload, usePreloaded } from '@/lib/lazy-zod-resolver';
+
+/**
+ * The shared request schemas that check what the maker types. They load on their own, right after
+ * the page paints; the border, size and yarn arithmetic (shared/border, shared/sizing) needs none
+ * of them, so the first plan is drawn before they arrive.
+ */
+export type PlannerChecks = Pick<typeof BorderFitSchemas, 'BorderFitRequestSchema' | 'GaugeSchema' | 'SizeFromGaugeRequestSchema' | 'YarnEstimateRequestSchema'>;
+const plannerChecks = preload((): Promise<PlannerChecks> => import('@shared/schemas/border-fit'));
 
 export type Terms = 'us' | 'uk';
 export type RowPresetId = 'hdc' | 'sc-dc' | 'dc' | 'sc' | 'plain' | 'custom';
@@ -72,9 +82,9 @@ export function defaultDepth(border: BorderPattern, unit: LengthUnit): string {
 }
 
 /** While the maker has not typed counts of their own, take the ones the swatch and size call for. */
-export function followSwatch(s: PlannerState): PlannerState {
+export function followSwatch(s: PlannerState, checks: PlannerChecks | null = null): PlannerState {
   if (s.countsTouched) return s;
-  const { sizing } = computePlanner(s);
+  const { sizing } = computePlanner(s, checks);
   if (!sizing) return s;
   const across = String(sizing.stitches);
   const rows = String(sizing.rows);
@@ -144,15 +154,34 @@ export interface PlannerResult {
   yarn: YarnEstimate | null;
 }
 
-export function computePlanner(s: PlannerState): PlannerResult {
+/** A count the arithmetic can take as it is, for the moment before the checks have loaded. */
+const plainCount = (n: number) => Number.isInteger(n) && n >= 1 && n <= MAX_EDGE_STITCHES;
+
+/** Runs the arithmetic, or says nothing if its input is not yet something it can work with. */
+function attempt<T>(work: () => T): T | null {
+  try {
+    return work();
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The planner's figures for what the maker has typed. With `checks` (the shared schemas) every
+ * input is checked and each mistake named in the screen's words. Without them, in the moment
+ * before they have loaded, the arithmetic works from the numbers as typed and only a blank field
+ * is named: every figure the checks let through is the same either way.
+ */
+export function computePlanner(s: PlannerState, checks: PlannerChecks | null): PlannerResult {
   const errors: FieldErrors = {};
   const border = borderById(s.borderId) ?? BORDER_LIBRARY[0]!;
 
   const acrossRaw = num(s.across);
   let across: number | undefined;
   if (acrossRaw === undefined) errors.across = 'Stitches across: enter the stitches in one row of the body';
+  else if (!checks) across = plainCount(acrossRaw) ? acrossRaw : undefined;
   else {
-    const r = BorderFitRequestSchema.shape.across.safeParse(acrossRaw);
+    const r = checks.BorderFitRequestSchema.shape.across.safeParse(acrossRaw);
     if (r.success) across = r.data;
     else errors.across = relabel(r.error.issues[0]!.message, 'across', 'Stitches across');
   }
@@ -167,9 +196,10 @@ export function computePlanner(s: PlannerState): PlannerResult {
   const rowsRaw = num(s.rows);
   let rows: BodyRows | undefined;
   if (rowsRaw === undefined) errors.rows = 'Rows: enter how many rows the body has';
+  else if (!checks) rows = plainCount(rowsRaw) && !(preset.id === 'custom' && !pattern) ? (pattern ? { count: rowsRaw, pattern } : rowsRaw) : undefined;
   else if (!(preset.id === 'custom' && !pattern)) {
     const value = pattern ? { count: rowsRaw, pattern } : rowsRaw;
-    const r = BorderFitRequestSchema.shape.rows.safeParse(value);
+    const r = checks.BorderFitRequestSchema.shape.rows.safeParse(value);
     if (r.success) rows = r.data;
     else {
       const issue = r.error.issues[0]!;
@@ -196,9 +226,13 @@ export function computePlanner(s: PlannerState): PlannerResult {
   }
 
   const over = s.unit === 'cm' ? 10 : 4;
-  const g = GaugeSchema.safeParse({ stitches: num(s.gaugeStitches), rows: num(s.gaugeRows), over, unit: s.unit });
+  const gaugeInput = { stitches: num(s.gaugeStitches), rows: num(s.gaugeRows), over, unit: s.unit };
   let gauge: Gauge | null = null;
-  if (g.success) gauge = g.data;
+  const g = checks?.GaugeSchema.safeParse(gaugeInput);
+  if (!g) {
+    const { stitches, rows } = gaugeInput;
+    if (stitches !== undefined && stitches > 0 && rows !== undefined && rows > 0) gauge = { ...gaugeInput, stitches, rows };
+  } else if (g.success) gauge = g.data;
   else
     for (const issue of g.error.issues) {
       const key = issue.path[0] === 'stitches' ? 'gaugeStitches' : 'gaugeRows';
@@ -215,7 +249,7 @@ export function computePlanner(s: PlannerState): PlannerResult {
 
   let sizing: BodyCounts | null = null;
   if (gauge && depth !== undefined) {
-    const req = SizeFromGaugeRequestSchema.safeParse({
+    const sizeInput = {
       gauge,
       target: { width: num(s.targetWidth), length: num(s.targetLength), unit: s.unit },
       borderDepth: depth,
@@ -224,8 +258,12 @@ export function computePlanner(s: PlannerState): PlannerResult {
       stitchOffset: num(s.stitchOffset),
       rowMultiple: pattern?.length ?? 1,
       rowOffset: 0,
-    });
-    if (req.success) {
+    };
+    const req = checks?.SizeFromGaugeRequestSchema.safeParse(sizeInput);
+    if (!req) {
+      const { width, length } = sizeInput.target;
+      if (width !== undefined && length !== undefined) sizing = attempt(() => bodyCountsFromGauge({ ...sizeInput, target: { ...sizeInput.target, width, length } }));
+    } else if (req.success) {
       try {
         sizing = bodyCountsFromGauge(req.data);
       } catch (err) {
@@ -255,14 +293,18 @@ export function computePlanner(s: PlannerState): PlannerResult {
 
   let yarn: YarnEstimate | null = null;
   if (sizes && depth !== undefined) {
-    const y = YarnEstimateRequestSchema.safeParse({
+    const yarnInput = {
       body: { width: sizes.body.width, length: sizes.body.length, unit: s.unit },
       yarnWeight: num(s.yarnWeight),
       border: { depth, yarnFactor: border.yarnFactor },
       margin: (num(s.marginPct) ?? Number.NaN) / 100,
       skein: { length: num(s.skeinLength), unit: s.skeinUnit },
-    });
-    if (y.success) yarn = estimateYarn(y.data);
+    };
+    const y = checks?.YarnEstimateRequestSchema.safeParse(yarnInput);
+    if (!y) {
+      const { yarnWeight, skein } = yarnInput;
+      if (yarnWeight !== undefined && skein.length !== undefined && skein.length > 0) yarn = attempt(() => estimateYarn({ ...yarnInput, yarnWeight, skein: { ...skein, length: skein.length! } }));
+    } else if (y.success) yarn = estimateYarn(y.data);
     else
       for (const issue of y.error.issues) {
         const path = issue.path.join('.');
@@ -338,8 +380,9 @@ function fromPlanInput(input: PlanInput): PlannerState {
 }
 
 export function usePlanner() {
+  const checks = usePreloaded(plannerChecks) ?? null;
   const [state, setState] = useState<PlannerState>(initialPlannerState);
-  const result = useMemo(() => computePlanner(state), [state]);
+  const result = useMemo(() => computePlanner(state, checks), [state, checks]);
 
   const update = useCallback((patch: Partial<PlannerState>) => {
     setState((s) => {
@@ -360,7 +403,7 @@ export function usePlanner() {
         next.targetLength = conv(s.targetLength, step);
         if (next.depthTouched) next.borderDepth = conv(s.borderDepth, next.unit === 'cm' ? 0.5 : 0.25);
       }
-      return followSwatch(next);
+      return followSwatch(next, plannerChecks.loaded?.value ?? null);
     });
   }, []);
 

@@ -8,8 +8,11 @@ import { describeGuidelines } from '@shared/guidelines/describe';
 import { featureLabel, fibreLabel, formatIn, yarnWeightName } from '@shared/guidelines/wording';
 import { FEATURES, FIBRES, POPULATION_LABELS, YARN_WEIGHTS } from '@shared/schemas/blanket-values';
 import type { Feature, Fibre } from '@shared/schemas/blanket';
-import { GuidelineSetSchema, type GuidelineSet } from '@shared/schemas/guidelines';
+import type { GuidelineSet } from '@shared/schemas/guidelines';
+import { preload, usePreloaded } from '@/lib/lazy-zod-resolver';
 import { fieldErrors, zodErrors } from './field-errors';
+
+const guidelineSchema = preload(() => import('@shared/schemas/guidelines').then((m) => m.GuidelineSetSchema));
 
 interface Props {
   guidelines: GuidelineSet;
@@ -41,8 +44,11 @@ export function GuidelineEditor({ guidelines, busy, error, onSave, saved }: Prop
   const [g, setG] = useState<GuidelineSet>(guidelines);
   const [sizeText, setSizeText] = useState<Record<string, string>>(() => Object.fromEntries(SIZE_FIELDS.map(([k]) => [k, String(guidelines[k])])));
   const [toleranceText, setToleranceText] = useState(String(guidelines.toleranceValue));
-  const parsed = useMemo(() => GuidelineSetSchema.safeParse(g), [g]);
-  const local = parsed.success ? {} : zodErrors(parsed.error.issues);
+  // The check joins in once the schema has loaded, a moment after the page paints; a save waits for it.
+  const schema = usePreloaded(guidelineSchema);
+  const parsed = useMemo(() => schema?.safeParse(g), [schema, g]);
+  const local = parsed && !parsed.success ? zodErrors(parsed.error.issues) : {};
+  const summarised = parsed ? (parsed.success ? parsed.data : null) : g;
   const errors = { ...fieldErrors(error), ...local };
   const set = <K extends keyof GuidelineSet>(key: K, value: GuidelineSet[K]) => setG((d) => ({ ...d, [key]: value }));
 
@@ -57,9 +63,10 @@ export function GuidelineEditor({ guidelines, busy, error, onSave, saved }: Prop
     <form
       className="space-y-6"
       noValidate
-      onSubmit={(e) => {
+      onSubmit={async (e) => {
         e.preventDefault();
-        if (parsed.success) onSave(parsed.data);
+        const checked = parsed ?? (await guidelineSchema()).safeParse(g);
+        if (checked.success) onSave(checked.data);
       }}
     >
       {error instanceof Error && <Alert kind="error">{error.message}</Alert>}
@@ -173,9 +180,9 @@ export function GuidelineEditor({ guidelines, busy, error, onSave, saved }: Prop
 
       <section aria-label="Summary for makers" className="rounded-xl bg-oat-100 p-4">
         <p className="mb-2 font-bold">What makers will read</p>
-        {parsed.success ? (
+        {summarised ? (
           <ul className="list-disc space-y-1 pl-5">
-            {describeGuidelines(parsed.data).map((line) => (
+            {describeGuidelines(summarised).map((line) => (
               <li key={line}>{line}</li>
             ))}
           </ul>
@@ -184,7 +191,7 @@ export function GuidelineEditor({ guidelines, busy, error, onSave, saved }: Prop
         )}
       </section>
 
-      <Button type="submit" size="lg" busy={busy} disabled={!parsed.success}>
+      <Button type="submit" size="lg" busy={busy} disabled={parsed ? !parsed.success : false}>
         Save the guidelines
       </Button>
     </form>

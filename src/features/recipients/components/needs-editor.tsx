@@ -9,11 +9,14 @@ import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import { formatCm, formatIn } from '@shared/guidelines/wording';
 import { SIZE_CATEGORIES } from '@shared/schemas/blanket-values';
 import type { SizeCategory } from '@shared/schemas/blanket';
-import { NeedCreateSchema, type NeedView } from '@shared/schemas/recipient';
+import type { NeedView } from '@shared/schemas/recipient';
+import { preload } from '@/lib/lazy-zod-resolver';
 import { useSaveNeed } from '../api/save-need';
 import { useDeleteNeed } from '../api/delete-need';
 import { fieldErrors, zodErrors } from './field-errors';
 import { formatDay } from '@/components/ui/format-day';
+
+const needSchema = preload(() => import('@shared/schemas/recipient').then((m) => m.NeedCreateSchema));
 
 function sizeWords(c: SizeCategory) {
   const row = sizeCategoryRow(c);
@@ -42,10 +45,10 @@ function NeedForm({ recipientId, need, onDone }: { recipientId: number; need?: N
     <form
       noValidate
       className="grid gap-3 rounded-xl border-2 border-heather-300 bg-heather-50 p-4 sm:grid-cols-4"
-      onSubmit={(e) => {
+      onSubmit={async (e) => {
         e.preventDefault();
         const body = { sizeCategory: d.sizeCategory, quantity: Number(d.quantity), deadline: d.deadline, preferences: d.preferences };
-        const parsed = NeedCreateSchema.safeParse(body);
+        const parsed = (await needSchema()).safeParse(body);
         if (!parsed.success) return setLocal(zodErrors(parsed.error.issues));
         setLocal({});
         save.mutate({ recipientId, needId: need?.id, need: parsed.data, version: need?.version }, { onSuccess: onDone });

@@ -6,11 +6,17 @@ import { Field, Select } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { serverFieldErrors } from '@/components/ui/form-errors';
 import { useDriveClock, useSetDriveZone } from '@/lib/drive-clock';
-import { TimeZoneSchema } from '@shared/schemas/schedule';
+import { preload, usePreloaded } from '@/lib/lazy-zod-resolver';
 
-/** The IANA zones this browser knows that the server's date library accepts too, grouped by region. */
-function zoneGroups(current: string | undefined): Array<[string, string[]]> {
-  const known = Intl.supportedValuesOf('timeZone').filter((z) => TimeZoneSchema.safeParse(z).success);
+const timeZoneSchema = preload(() => import('@shared/schemas/schedule').then((m) => m.TimeZoneSchema));
+type TimeZoneCheck = Awaited<ReturnType<typeof timeZoneSchema>>;
+
+/**
+ * The IANA zones this browser knows that the server's date library accepts too, grouped by region.
+ * Until the check has loaded (a moment after the page paints) the list holds the current zone only.
+ */
+function zoneGroups(current: string | undefined, zoneCheck: TimeZoneCheck | undefined): Array<[string, string[]]> {
+  const known = zoneCheck ? Intl.supportedValuesOf('timeZone').filter((z) => zoneCheck.safeParse(z).success) : [];
   if (current && !known.includes(current)) known.push(current);
   const groups = new Map<string, string[]>();
   for (const z of known.sort()) {
@@ -33,7 +39,8 @@ export function DriveZoneForm() {
   const save = useSetDriveZone();
   const [chosen, setChosen] = useState<string | null>(null);
   const current = clock.data?.timeZone;
-  const groups = useMemo(() => zoneGroups(current), [current]);
+  const zoneCheck = usePreloaded(timeZoneSchema);
+  const groups = useMemo(() => zoneGroups(current, zoneCheck), [current, zoneCheck]);
   const value = chosen ?? current ?? '';
   const fieldError = serverFieldErrors(save.error).timeZone;
   return (

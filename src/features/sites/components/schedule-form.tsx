@@ -4,7 +4,8 @@ import { Button } from '@/components/ui/button';
 import { Field, Input, Select } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import type { SiteView } from '@shared/schemas/site';
-import { EMPTY_HOURS, WEEKDAYS, WEEKDAY_LABELS, type Closure, type OpeningHours, type Weekday } from '@shared/schemas/schedule';
+import { EMPTY_HOURS, WEEKDAYS, WEEKDAY_LABELS, type Weekday } from '@shared/schemas/schedule-values';
+import type { Closure, OpeningHours } from '@shared/schemas/schedule';
 import { useSaveSiteSchedule } from '../api/save-site-schedule';
 
 const SLOT_LENGTHS = [15, 20, 30, 45, 60];

@@ -4,8 +4,11 @@ import { Checkbox, Field, Input, Textarea } from '@/components/ui/field';
 import { Alert } from '@/components/ui/alert';
 import { DEMO_TOWN_CENTRE, PinMap } from '@/components/ui/pin-map';
 import { ApiError } from '@/lib/api-client';
-import { SiteCreateSchema, type SiteView } from '@shared/schemas/site';
+import type { SiteView } from '@shared/schemas/site';
+import { preload } from '@/lib/lazy-zod-resolver';
 import type { SiteInput } from '../api/save-site';
+
+const siteSchema = preload(() => import('@shared/schemas/site').then((m) => m.SiteCreateSchema));
 
 function errorsOf(err: unknown, issues: ReadonlyArray<{ path: PropertyKey[]; message: string }>): Record<string, string> {
   const out: Record<string, string> = {};
@@ -36,9 +39,9 @@ export function SiteForm({ site, others, busy, error, onSubmit, onCancel }: Prop
   const [issues, setIssues] = useState<ReadonlyArray<{ path: PropertyKey[]; message: string }>>([]);
   const errors = errorsOf(error, issues);
   const num = (s: string) => (s.trim() === '' ? null : Number(s));
-  const submit = (e: FormEvent) => {
+  const submit = async (e: FormEvent) => {
     e.preventDefault();
-    const parsed = SiteCreateSchema.safeParse(d);
+    const parsed = (await siteSchema()).safeParse(d);
     if (!parsed.success) return setIssues(parsed.error.issues);
     setIssues([]);
     onSubmit(d);
