@@ -1,3 +1,6 @@
+import type { Sequelize } from 'sequelize';
+import { preparedRead } from './prepared-read';
+
 /**
  * Answers kept until the database is written. Every statement that can change data, on any
  * connection the driver opens (server/db/sqlite-column-cache.ts), moves the write generation on
@@ -5,37 +8,43 @@
  * out only while the generation it was read under still holds. A reader takes the generation
  * before its first statement, so an answer read while a transaction was still open (and so without
  * its writes) is dropped when that transaction commits, even if the commit lands while the reader
- * is still working.
+ * is still working. Commits from outside the process are seen through SQLite's data_version
+ * (`watchOtherWriters`) within a quarter of a second.
  *
- * Writes to the sessions table alone do not count: no kept answer reads sessions, and signed-in
- * reads renew their session's row once a minute.
+ * Writes to the sessions table alone move only the session generation: signed-in reads renew their
+ * session's row once a minute, and no kept answer but the session rows themselves reads sessions.
+ * Every other write moves both.
  */
+
 let generation = 0;
+let sessionGeneration = 0;
 
 export const writeGeneration = (): number => generation;
+export const sessionWriteGeneration = (): number => sessionGeneration;
 
 /** Called by the driver around every statement that may change data. */
-export function noteWrite(): void {
-  generation += 1;
+export function noteWrite(kind: 'data' | 'sessions' = 'data'): void {
+  sessionGeneration += 1;
+  if (kind === 'data') generation += 1;
 }
 
-const READ = /^\s*(SELECT\b|PRAGMA\s+table_info\b|BEGIN\b|ROLLBACK\b|SAVEPOINT\b|RELEASE\b|EXPLAIN\b)/i;
+const READ = /^\s*(SELECT\b|PRAGMA\s+table_info\b|PRAGMA\s+data_version\b|BEGIN\b|ROLLBACK\b|SAVEPOINT\b|RELEASE\b|EXPLAIN\b)/i;
 const READING_WITH = /^\s*WITH\b/i;
 const WRITES_IN_IT = /\b(INSERT|UPDATE|DELETE|REPLACE)\b/i;
 const SESSIONS_ONLY = /^\s*(UPDATE|INSERT(\s+OR\s+\w+)?\s+INTO|DELETE\s+FROM)\s+`?sessions`?\s/i;
 
-/** Whether a statement may change what a read sees (conservative: anything not known to be a read). */
-export function mayWrite(sql: string): boolean {
-  if (READ.test(sql)) return false;
-  if (READING_WITH.test(sql) && !WRITES_IN_IT.test(sql)) return false;
-  if (SESSIONS_ONLY.test(sql)) return false;
-  return true;
+/** What a statement may change (conservative: anything not known to be a read counts as data). */
+export function writeKind(sql: string): 'read' | 'sessions' | 'data' {
+  if (READ.test(sql)) return 'read';
+  if (READING_WITH.test(sql) && !WRITES_IN_IT.test(sql)) return 'read';
+  if (SESSIONS_ONLY.test(sql)) return 'sessions';
+  return 'data';
 }
 
-/**
- * Out-of-process writers (a script run against the live file) go past the driver; kept answers are
- * read again at least this often so such a change shows within seconds.
- */
+/** Whether a statement may change what a kept answer read. */
+export const mayWrite = (sql: string): boolean => writeKind(sql) === 'data';
+
+/** Kept answers are read again at least this often, whatever the generations say. */
 export const KEPT_MAX_MS = 10_000;
 
 interface Entry {
@@ -113,4 +122,39 @@ export async function keptUntilWrite<T>(database: object, key: string, compute: 
   } finally {
     if (running.get(key)?.promise === promise) running.delete(key);
   }
+}
+
+/** How often the file is asked whether another process has committed to it. */
+export const OTHER_WRITERS_EVERY_MS = 250;
+
+/**
+ * Commits by another process (a script run against the live file) never pass this process's driver.
+ * SQLite's `PRAGMA data_version` changes on a connection whenever another connection has committed,
+ * so asking it on the connection used outside transactions, a few times a second, moves the
+ * generations on for those too (and, harmlessly, once more for this process's own transactions).
+ * Stops when the database is closed.
+ */
+export function watchOtherWriters(sequelize: Sequelize): void {
+  let last: number | undefined;
+  let asking = false;
+  const timer = setInterval(() => {
+    if (asking) return;
+    asking = true;
+    preparedRead<{ data_version: number }>(sequelize, 'PRAGMA data_version', [])
+      .then(([row]) => {
+        const version = row?.data_version;
+        if (last !== undefined && version !== last) noteWrite('data');
+        last = version;
+      })
+      .catch(() => clearInterval(timer))
+      .finally(() => {
+        asking = false;
+      });
+  }, OTHER_WRITERS_EVERY_MS);
+  timer.unref();
+  const close = sequelize.close.bind(sequelize);
+  sequelize.close = () => {
+    clearInterval(timer);
+    return close();
+  };
 }

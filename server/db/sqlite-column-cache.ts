@@ -1,5 +1,5 @@
 import sqlite3 from 'sqlite3';
-import { mayWrite, noteWrite } from './kept';
+import { noteWrite, writeKind } from './kept';
 
 type Callback = (err: Error | null, rows: unknown[]) => void;
 
@@ -60,13 +60,15 @@ class CachingDatabase extends sqlite3.Database {
    * data runs and again once it has finished (for a COMMIT, once its writes are visible to others).
    */
   private watchWrite(sql: unknown, rest: unknown[]): unknown[] {
-    if (typeof sql !== 'string' || !mayWrite(sql)) return rest;
-    noteWrite();
+    if (typeof sql !== 'string') return rest;
+    const kind = writeKind(sql);
+    if (kind === 'read') return rest;
+    noteWrite(kind);
     const last = rest.length - 1;
     const callback = rest[last];
     if (typeof callback !== 'function') return rest;
     const after = function (this: unknown, ...args: unknown[]) {
-      noteWrite();
+      noteWrite(kind);
       return (callback as (...a: unknown[]) => unknown).apply(this, args);
     };
     return [...rest.slice(0, last), after];

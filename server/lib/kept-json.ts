@@ -1,4 +1,5 @@
 import { createHash } from 'node:crypto';
+import { gzipSync } from 'node:zlib';
 import type { Request, RequestHandler } from 'express';
 import { Drive } from '../db/models/drive';
 import { keptUntilWrite } from '../db/kept';
@@ -17,9 +18,14 @@ export interface KeptJsonOptions<T> {
 
 interface Kept {
   body: Buffer;
+  /** The body gzipped, made on the first request that accepts it. */
+  gzipped?: Buffer;
   etag: string;
   until: number;
 }
+
+/** What the compression middleware leaves alone as not worth compressing (its default threshold). */
+const GZIP_FROM_BYTES = 1024;
 
 /**
  * A read route's answer, kept serialised until anything is written to the database
@@ -45,7 +51,17 @@ export function keptJson<T>(opts: KeptJsonOptions<T>, answer: (req: Request) => 
     );
     res.setHeader('ETag', kept.etag);
     res.type('application/json');
-    // Express answers 304 itself when the request's If-None-Match matches the ETag set here.
+    // Gzipped once per kept answer rather than on every request; the compression middleware leaves
+    // a response that already names its encoding alone.
+    if (kept.body.length >= GZIP_FROM_BYTES) {
+      res.vary('Accept-Encoding');
+      if (req.acceptsEncodings('gzip', 'identity') === 'gzip') {
+        kept.gzipped ??= gzipSync(kept.body);
+        res.setHeader('Content-Encoding', 'gzip');
+        // Express answers 304 itself when the request's If-None-Match matches the ETag set here.
+        return res.send(kept.gzipped);
+      }
+    }
     res.send(kept.body);
   };
 }

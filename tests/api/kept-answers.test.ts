@@ -1,9 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
+import request from 'supertest';
+import sqlite3 from 'sqlite3';
 import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
 import { Need } from '../../server/db/models/need';
 import { Recipient } from '../../server/db/models/recipient';
-import { keptUntilWrite, mayWrite, writeGeneration } from '../../server/db/kept';
+import { OTHER_WRITERS_EVERY_MS, keptUntilWrite, mayWrite, writeGeneration, writeKind } from '../../server/db/kept';
 import { setClock } from '../../server/lib/clock';
 import type { OpenNeed } from '@shared/schemas/pledge';
 import type { RecipientView } from '@shared/schemas/recipient';
@@ -41,6 +43,16 @@ describe('an answer kept until a write', () => {
     expect(etag).toMatch(/^W\/"/);
     const again = await vol.get('/api/recipients').set('If-None-Match', etag);
     expect(again.status).toBe(304);
+  });
+
+  it('sends the kept body gzipped to a client that accepts it, and plain to one that does not', async () => {
+    const plain = await vol.get('/api/needs').set('Accept-Encoding', 'identity');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(plain.headers.vary).toMatch(/Accept-Encoding/);
+    const zipped = await vol.get('/api/needs').set('Accept-Encoding', 'gzip, deflate');
+    expect(zipped.headers['content-encoding']).toBe('gzip');
+    expect(zipped.text).toBe(plain.text);
+    expect(Number(zipped.headers['content-length'])).toBeLessThan(Buffer.byteLength(plain.text));
   });
 
   it("shows another person's pledge on the next read", async () => {
@@ -118,6 +130,9 @@ describe('which statements count as writes', () => {
     for (const sql of ['SELECT * FROM needs', '  select 1', 'PRAGMA table_info(`needs`)', 'BEGIN IMMEDIATE TRANSACTION;', 'WITH x AS (SELECT 1) SELECT * FROM x', 'UPDATE `sessions` SET `data`=? WHERE `sid` = ?']) {
       expect({ sql, write: mayWrite(sql) }).toEqual({ sql, write: false });
     }
+    for (const sql of ['UPDATE `sessions` SET `data`=? WHERE `sid` = ?', 'DELETE FROM `sessions` WHERE `sid` = ?', 'INSERT INTO `sessions` (`sid`) VALUES (?)']) {
+      expect({ sql, kind: writeKind(sql) }).toEqual({ sql, kind: 'sessions' });
+    }
   });
 
   it('moves the generation on for a transaction that writes', async () => {
@@ -126,5 +141,29 @@ describe('which statements count as writes', () => {
       await Need.update({ preferences: 'warm colours' }, { where: { id: (await Need.findOne({ transaction }))!.id }, transaction });
     });
     expect(writeGeneration()).toBeGreaterThan(before);
+  });
+});
+
+describe('sessions kept until a session is written', () => {
+  it('refuses a cookie replayed after its session signed out', async () => {
+    const c = await signedIn(t.app, 'coordinator');
+    expect((await c.get('/api/auth/me')).status).toBe(200);
+    const cookie = (await c.get('/api/auth/me')).request.cookies;
+    expect((await c.post('/api/auth/logout')).status).toBeLessThan(300);
+    const replay = await request(t.app).get('/api/auth/me').set('Cookie', cookie);
+    expect(replay.status).toBe(401);
+  });
+
+  it('refuses a session deleted by another process, within a moment', async () => {
+    const c = await signedIn(t.app, 'organiser@example.org');
+    expect((await c.get('/api/auth/me')).status).toBe(200);
+    expect((await c.get('/api/auth/me')).status).toBe(200);
+    const other = new sqlite3.Database(t.config.databasePath);
+    await new Promise<void>((resolve, reject) =>
+      other.run('DELETE FROM sessions WHERE userId = (SELECT id FROM users WHERE email = ?)', ['organiser@example.org'], (err) => (err ? reject(err) : resolve())),
+    );
+    await new Promise<void>((resolve) => other.close(() => resolve()));
+    await new Promise((r) => setTimeout(r, OTHER_WRITERS_EVERY_MS * 3));
+    expect((await c.get('/api/auth/me')).status).toBe(401);
   });
 });

@@ -3,6 +3,7 @@ import { Drive } from '../../db/models/drive';
 import { nowMs } from '../../lib/clock';
 import { preparedRead } from '../../db/prepared-read';
 import { keptUntilWrite } from '../../db/kept';
+import { DateTime } from 'luxon';
 import { todayIn } from '@shared/scheduling/slots';
 
 /** The fallback when no drive row exists yet (a fresh database before seeding). */
@@ -46,7 +47,21 @@ export interface DriveNow {
 export async function driveNow(transaction?: Transaction): Promise<DriveNow> {
   const zone = await driveZone(transaction);
   const at = nowMs();
-  return { zone, nowMs: at, today: todayIn(zone, at) };
+  return { zone, nowMs: at, today: dayAt(zone, at) };
+}
+
+/**
+ * The drive's date at an instant, remembered with the instants its day starts and ends: most
+ * requests ask for it, and working it out through the time-zone rules each time was a measurable
+ * part of a kept answer's cost.
+ */
+let lastDay: { zone: string; from: number; to: number; today: string } | null = null;
+function dayAt(zone: string, at: number): string {
+  if (lastDay && lastDay.zone === zone && at >= lastDay.from && at < lastDay.to) return lastDay.today;
+  const local = DateTime.fromMillis(at, { zone });
+  const today = todayIn(zone, at);
+  lastDay = { zone, from: local.startOf('day').toMillis(), to: local.plus({ days: 1 }).startOf('day').toMillis(), today };
+  return today;
 }
 
 export async function driveToday(transaction?: Transaction): Promise<string> {
