@@ -2,6 +2,7 @@ import type { Transaction } from 'sequelize';
 import { Drive } from '../../db/models/drive';
 import { nowMs } from '../../lib/clock';
 import { preparedRead } from '../../db/prepared-read';
+import { keptUntilWrite } from '../../db/kept';
 import { todayIn } from '@shared/scheduling/slots';
 
 /** The fallback when no drive row exists yet (a fresh database before seeding). */
@@ -10,10 +11,12 @@ export const DEFAULT_TIME_ZONE = 'Europe/London';
 /** The drive's IANA time zone: every slot, booking time and "today" is read in it. */
 export async function driveZone(transaction?: Transaction): Promise<string> {
   if (!transaction) {
-    // Most reads ask for the day; outside a transaction a prepared statement answers it for a
-    // fraction of a model query's cost (server/db/prepared-read.ts).
-    const [row] = await preparedRead<{ timeZone: string }>(Drive.sequelize!, 'SELECT timeZone FROM drives ORDER BY id ASC LIMIT 1', []);
-    return row?.timeZone ?? DEFAULT_TIME_ZONE;
+    // Most reads ask for the day; outside a transaction the zone is kept until the next write
+    // (server/db/kept.ts) and read through a prepared statement (server/db/prepared-read.ts).
+    return keptUntilWrite(Drive.sequelize!, 'drive-zone', async () => {
+      const [row] = await preparedRead<{ timeZone: string }>(Drive.sequelize!, 'SELECT timeZone FROM drives ORDER BY id ASC LIMIT 1', []);
+      return row?.timeZone ?? DEFAULT_TIME_ZONE;
+    });
   }
   const drive = await Drive.findOne({ order: [['id', 'ASC']], attributes: ['id', 'timeZone'], transaction });
   return drive?.timeZone ?? DEFAULT_TIME_ZONE;
