@@ -6,6 +6,7 @@ import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
 import { Recipient } from '../../server/db/models/recipient';
 import { Site } from '../../server/db/models/site';
 import { User } from '../../server/db/models/user';
+import { BlanketEvent } from '../../server/db/models/blanket-event';
 import { MANIFEST_COLUMNS } from '../../server/modules/runs/manifest-format';
 import type { ExportView, RunView } from '@shared/schemas/run';
 import type { Page } from '@shared/schemas/page';
@@ -17,6 +18,7 @@ let organiser: Client;
 let volunteer: Client;
 let run: RunView;
 let shelter: Recipient;
+let latestChecker: string;
 
 /** supertest buffers text/csv as a string; keep the raw bytes to see the BOM and CRLFs. */
 const raw = (c: Client, url: string) =>
@@ -37,8 +39,15 @@ beforeAll(async () => {
   const site = (await Site.findOne())!;
   // Names, colours and a recipient that a spreadsheet would take for formulas (OWASP CSV Injection).
   await maker.update({ name: '@Mallory Formula' });
-  await shelter.update({ name: '+Harbour Lantern, "east" door' });
-  await assignedBlanket(maker.id, shelter.id, { colours: '=HYPERLINK("http://bad.example.org","x")' });
+  // An address on two lines: quoted in the file, and still one row for one blanket.
+  await shelter.update({ name: '+Harbour Lantern, "east" door', address: '4 Quay Row\nThimbleford' });
+  const checkedOne = await assignedBlanket(maker.id, shelter.id, { colours: '=HYPERLINK("http://bad.example.org","x")', measuredWidthCm: 78.5, measuredLengthCm: 101 });
+  const checkers = await User.findAll({ where: { role: 'organiser' }, order: [['id', 'ASC']], limit: 2 });
+  // Checked twice (sent back, checked again): the latest check names who and when.
+  await BlanketEvent.create({ blanketId: checkedOne.id, actorId: checkers[0]!.id, kind: 'inspection', fromStatus: 'received', toStatus: 'checked', createdAt: new Date('2026-11-28T23:30:00Z') });
+  await BlanketEvent.create({ blanketId: checkedOne.id, actorId: checkers[0]!.id, kind: 'inspection', fromStatus: 'checked', toStatus: 'received', createdAt: new Date('2026-11-29T09:00:00Z') });
+  await BlanketEvent.create({ blanketId: checkedOne.id, actorId: checkers[checkers.length - 1]!.id, kind: 'inspection', fromStatus: 'received', toStatus: 'checked', createdAt: new Date('2026-11-30T10:15:00Z') });
+  latestChecker = checkers[checkers.length - 1]!.name;
   await assignedBlanket(anonymousMaker.id, shelter.id, { colours: '-2+3 stripes', labelName: 'anonymous' });
   await assignedBlanket(maker.id, shelter.id, { colours: 'cream and moss' });
   const res = await coordinator.post('/api/runs', { runDate: '2026-12-20', driverId: maker.id, startSiteId: site.id, recipientIds: [shelter.id] });
@@ -66,7 +75,14 @@ describe('GET /api/runs/:id/manifest.csv', () => {
       expect(r[col('Stop')]).toBe('1');
       expect(r[col('Box')]).toBe('1');
       expect(r[col('Blanket code')]).toMatch(/^KL-/);
+      expect(r[col('Address')]).toBe('4 Quay Row\nThimbleford');
     }
+    // The blanket re-measured at intake and checked twice: its size on record, the latest check.
+    const checked = rows.find((r) => r[col('Colours')]!.includes('HYPERLINK'))!;
+    expect([checked[col('Width (cm)')], checked[col('Length (cm)')], checked[col('Width (in)')], checked[col('Length (in)')]]).toEqual(['78.5', '101', '30.9', '39.8']);
+    expect([checked[col('Checked by')], checked[col('Checked on')]]).toEqual([latestChecker, '2026-11-30']);
+    const unchecked = rows.find((r) => r[col('Colours')] === 'cream and moss')!;
+    expect([unchecked[col('Checked by')], unchecked[col('Checked on')]]).toEqual(['', '']);
   });
 
   it('makes formula cells inert (OWASP CSV Injection) and keeps plain text as it is', async () => {

@@ -1,12 +1,24 @@
 import { describe, expect, it } from 'vitest';
-import { MANIFEST_COLUMNS, manifestRecord, neutralise, type ManifestSourceRow } from '../../server/modules/runs/manifest-format';
+import {
+  MANIFEST_COLUMNS,
+  MANIFEST_SOURCE_FIELDS,
+  manifestRecord,
+  manifestShaper,
+  neutralise,
+  type ManifestDestination,
+  type ManifestSourceRow,
+} from '../../server/modules/runs/manifest-format';
 
-const row = (over: Partial<ManifestSourceRow> = {}): ManifestSourceRow => ({
+type Named = { [K in (typeof MANIFEST_SOURCE_FIELDS)[number]]: ManifestSourceRow[number] };
+const to: ManifestDestination = { recipient: 'Harbour Lantern Family Shelter', address: '4 Quay Row, Thimbleford' };
+
+/** A page row as the query returns it, written out by field name. */
+const row = (over: Partial<Named> = {}): ManifestSourceRow => {
+  const named: Named = {
   runDate: '2026-12-06',
   position: 2,
-  recipient: 'Harbour Lantern Family Shelter',
-  address: '4 Quay Row, Thimbleford',
   box: 3,
+  blanketId: 41,
   code: 'KL-ABCD',
   widthCm: 80,
   lengthCm: 100,
@@ -23,13 +35,15 @@ const row = (over: Partial<ManifestSourceRow> = {}): ManifestSourceRow => ({
   labelName: 'first-name',
   makerName: 'Maren Oakley',
   checkedBy: 'Odile Farrant',
-  checkedAt: '2026-11-30 10:15:00.000 +00:00',
+  checkedOn: '2026-11-30',
   ...over,
-});
+  };
+  return MANIFEST_SOURCE_FIELDS.map((f) => named[f]) as ManifestSourceRow;
+};
 
 describe('manifest rows', () => {
   it('has one value per column, with the size on record in cm and inches', () => {
-    const r = manifestRecord(row());
+    const r = manifestRecord(row(), to);
     expect(r).toHaveLength(MANIFEST_COLUMNS.length);
     const at = (c: (typeof MANIFEST_COLUMNS)[number]) => r[MANIFEST_COLUMNS.indexOf(c)];
     // The size re-measured at intake wins over the logged one.
@@ -47,10 +61,27 @@ describe('manifest rows', () => {
   });
 
   it('says "Anonymous" where the maker chose it, and leaves run columns empty for a blanket on no run', () => {
-    const r = manifestRecord(row({ labelName: 'anonymous', runDate: null, position: null, box: null, checkedBy: null, checkedAt: null }));
+    const r = manifestRecord(row({ labelName: 'anonymous', runDate: null, position: null, box: null, checkedBy: null, checkedOn: null }), to);
     expect(r[MANIFEST_COLUMNS.indexOf('Made by (as on the label)')]).toBe('Anonymous');
     expect(r.slice(0, 2)).toEqual(['', '']);
     expect(r[MANIFEST_COLUMNS.indexOf('Checked on')]).toBe('');
+  });
+
+  it('gives each row its own words when one shaper remembers them across a manifest', () => {
+    const shape = manifestShaper();
+    const col = (name: (typeof MANIFEST_COLUMNS)[number]) => MANIFEST_COLUMNS.indexOf(name);
+    const rows = [
+      row({ fibres: '["wool"]', features: '["fringe"]', makerName: '  Ines   Harrow ', yarnWeight: 5 }),
+      row({ fibres: '["acrylic","cotton"]', features: '[]', makerName: 'Maren Oakley', yarnWeight: 4 }),
+      row({ fibres: '["wool"]', features: '["fringe"]', makerName: 'Ines Harrow', labelName: 'anonymous', yarnWeight: 5 }),
+      row({ fibres: '["acrylic","cotton"]', features: '[]', makerName: null, yarnWeight: 4, measuredWidthCm: null }),
+    ].map((r) => shape(r, to));
+    expect(rows.map((r) => r[col('Fibres')])).toEqual(['wool', 'acrylic; cotton', 'wool', 'acrylic; cotton']);
+    expect(rows.map((r) => r[col('Features')])).toEqual(['fringe', '', 'fringe', '']);
+    expect(rows.map((r) => r[col('Made by (as on the label)')])).toEqual(['Ines', 'Maren', 'Anonymous', 'Anonymous']);
+    expect(rows.map((r) => r[col('Yarn weight')])).toEqual(['5 (bulky)', '4 (medium)', '5 (bulky)', '4 (medium)']);
+    // Only one measured side: the logged size stands (80 × 100 cm; 80 / 2.54 = 31.5, 100 / 2.54 = 39.4).
+    expect([rows[3]![col('Width (cm)')], rows[3]![col('Length (cm)')], rows[3]![col('Width (in)')], rows[3]![col('Length (in)')]]).toEqual([80, 100, 31.5, 39.4]);
   });
 });
 

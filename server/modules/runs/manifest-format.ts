@@ -30,44 +30,71 @@ export const MANIFEST_COLUMNS = [
   'Checked on',
 ] as const;
 
-/** One blanket's row as the database query returns it (SQLite gives JSON as text and booleans as 0/1). */
-export interface ManifestSourceRow {
-  runDate: string | null;
-  position: number | null;
+/**
+ * One blanket as the page query hands it over: a JSON array with the fields in this order (the
+ * service builds its SQL from the same list). An array parsed from one JSON text per page costs far
+ * less than an object per row from the driver: most of a large manifest's time went into making and
+ * copying those objects. SQLite gives JSON columns as text, booleans as 0/1 and the check's day
+ * ready cut from its UTC timestamp.
+ */
+export const MANIFEST_SOURCE_FIELDS = [
+  'runDate',
+  'position',
+  'box',
+  'blanketId',
+  'code',
+  'widthCm',
+  'lengthCm',
+  'measuredWidthCm',
+  'measuredLengthCm',
+  'yarnWeight',
+  'fibres',
+  'colours',
+  'features',
+  'machineWashable',
+  'dryerSafe',
+  'smokeFree',
+  'petFree',
+  'labelName',
+  'makerName',
+  'checkedBy',
+  'checkedOn',
+] as const;
+
+export type ManifestSourceRow = [
+  runDate: string | null,
+  position: number | null,
+  box: number | null,
+  blanketId: number,
+  code: string,
+  widthCm: number,
+  lengthCm: number,
+  measuredWidthCm: number | null,
+  measuredLengthCm: number | null,
+  yarnWeight: number,
+  fibres: string,
+  colours: string,
+  features: string,
+  machineWashable: number,
+  dryerSafe: number,
+  smokeFree: number,
+  petFree: number,
+  labelName: string,
+  makerName: string | null,
+  checkedBy: string | null,
+  checkedOn: string | null,
+];
+
+/** Where the blanket goes: the same for every row of a stop, so it is passed once, not read per row. */
+export interface ManifestDestination {
   recipient: string;
   address: string;
-  box: number | null;
-  code: string;
-  widthCm: number;
-  lengthCm: number;
-  measuredWidthCm: number | null;
-  measuredLengthCm: number | null;
-  yarnWeight: number;
-  fibres: string | Fibre[];
-  colours: string;
-  features: string | Feature[];
-  machineWashable: number | boolean;
-  dryerSafe: number | boolean;
-  smokeFree: number | boolean;
-  petFree: number | boolean;
-  labelName: string;
-  makerName: string | null;
-  checkedBy: string | null;
-  checkedAt: string | Date | null;
 }
 
 export type ManifestRecord = Array<string | number>;
 
 const yesNo = (v: number | boolean) => (v ? 'yes' : 'no');
-const list = <T>(v: string | T[]): T[] => (typeof v === 'string' ? (JSON.parse(v) as T[]) : v);
 const oneDecimal = (n: number) => Math.round(n * 10) / 10;
-
-/** "2026-12-03", whatever form the date came in. */
-function isoDay(v: string | Date | null): string {
-  if (v === null) return '';
-  const d = typeof v === 'string' ? new Date(v.includes('T') || v.includes(' ') ? v.replace(' ', 'T').replace(/ \+00:00$/, 'Z') : v) : v;
-  return Number.isNaN(d.getTime()) ? String(v).slice(0, 10) : d.toISOString().slice(0, 10);
-}
 
 /** The label name as the maker chose it: their first name, or "Anonymous". */
 function label(labelName: string, makerName: string | null): string {
@@ -75,32 +102,62 @@ function label(labelName: string, makerName: string | null): string {
   return makerName.trim().split(/\s+/)[0] ?? 'Anonymous';
 }
 
-export function manifestRecord(r: ManifestSourceRow): ManifestRecord {
-  const size = sizeOnRecord(r);
-  return [
-    r.runDate ?? '',
-    r.position ?? '',
-    r.recipient,
-    r.address,
-    r.box ?? '',
-    r.code,
-    sizeCategoryFor(size.widthCm, size.lengthCm) ?? 'outside the size table',
-    oneDecimal(size.widthCm),
-    oneDecimal(size.lengthCm),
-    oneDecimal(fromCm(size.widthCm, 'in')),
-    oneDecimal(fromCm(size.lengthCm, 'in')),
-    `${r.yarnWeight} (${yarnWeightName(r.yarnWeight)})`,
-    list<Fibre>(r.fibres).map(fibreLabel).join('; '),
-    r.colours,
-    list<Feature>(r.features).map(featureLabel).join('; '),
-    yesNo(r.machineWashable),
-    yesNo(r.dryerSafe),
-    yesNo(r.smokeFree),
-    yesNo(r.petFree),
-    label(r.labelName, r.makerName),
-    r.checkedBy ?? '',
-    isoDay(r.checkedAt),
-  ];
+/** Remembers a few thousand answers of a pure function of one text; a manifest repeats them on most rows. */
+function remembered<K, V>(fn: (k: K) => V, limit = 4096): (k: K) => V {
+  const seen = new Map<K, V>();
+  return (k) => {
+    let v = seen.get(k);
+    if (v === undefined) {
+      if (seen.size >= limit) seen.clear();
+      v = fn(k);
+      seen.set(k, v);
+    }
+    return v;
+  };
+}
+
+/**
+ * A shaper for one manifest: turns page rows into records in column order. The words that depend on
+ * a stored list or a table (fibres, features, yarn weight, the maker's first name) are worked out once
+ * per distinct value and remembered for the rest of the manifest.
+ */
+export function manifestShaper(): (r: ManifestSourceRow, to: ManifestDestination) => ManifestRecord {
+  const fibres = remembered((text: string) => (JSON.parse(text) as Fibre[]).map(fibreLabel).join('; '));
+  const features = remembered((text: string) => (JSON.parse(text) as Feature[]).map(featureLabel).join('; '));
+  const weight = remembered((w: number) => `${w} (${yarnWeightName(w)})`);
+  const firstName = remembered((name: string | null) => label('first-name', name));
+  return (r, to) => {
+    const { widthCm, lengthCm } = sizeOnRecord({ widthCm: r[5], lengthCm: r[6], measuredWidthCm: r[7], measuredLengthCm: r[8] });
+    return [
+      r[0] ?? '',
+      r[1] ?? '',
+      to.recipient,
+      to.address,
+      r[2] ?? '',
+      r[4],
+      sizeCategoryFor(widthCm, lengthCm) ?? 'outside the size table',
+      oneDecimal(widthCm),
+      oneDecimal(lengthCm),
+      oneDecimal(fromCm(widthCm, 'in')),
+      oneDecimal(fromCm(lengthCm, 'in')),
+      weight(r[9]),
+      fibres(r[10]),
+      r[11],
+      features(r[12]),
+      yesNo(r[13]),
+      yesNo(r[14]),
+      yesNo(r[15]),
+      yesNo(r[16]),
+      r[17] === 'anonymous' ? 'Anonymous' : firstName(r[18]),
+      r[19] ?? '',
+      r[20] ?? '',
+    ];
+  };
+}
+
+/** One row's record, for a caller with a single row; a manifest uses one shaper for all its rows. */
+export function manifestRecord(r: ManifestSourceRow, to: ManifestDestination): ManifestRecord {
+  return manifestShaper()(r, to);
 }
 
 /** A plain number with an optional sign ("-3", "+2.5"): data, not a formula, so left as it is. */
