@@ -13,6 +13,7 @@ import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { mountRoutes, type RouteDef } from './modules/route-table';
 import { allRoutes } from './modules/all-routes';
 import { preparedRead } from './db/prepared-read';
+import { KEPT_MAX_MS, sessionWriteGeneration } from './db/kept';
 
 /** How stale the session's stamp (and its stored expiry) may grow before a request renews it. */
 export const TOUCH_EVERY_MS = 60_000;
@@ -65,17 +66,34 @@ export function createApp(deps: AppDeps): KindloopApp {
     }),
   };
   // Reading the session is the one store call every request makes; it goes through a prepared
-  // statement instead of a model query (the store's writes stay as they are).
+  // statement instead of a model query (the store's writes stay as they are), and its row is kept
+  // until anything writes to the sessions table (server/db/kept.ts): a sign-out, a revocation, the
+  // expiry sweep or another session's renewal. Each request still checks its session against that.
+  const keptSessions = new Map<string, { generation: number; at: number; data: string }>();
+  const answer = (fn: (err: unknown, session?: session.SessionData | null) => void, stored: string | null | undefined) => {
+    let data: session.SessionData | null;
+    try {
+      data = stored ? (JSON.parse(stored) as session.SessionData) : null;
+    } catch (err) {
+      return fn(err);
+    }
+    fn(null, data);
+  };
   class SessionStore extends SequelizeStore {
     override get(sid: string, fn: (err: unknown, session?: session.SessionData | null) => void) {
+      const generation = sessionWriteGeneration();
+      const kept = keptSessions.get(sid);
+      if (kept && kept.generation === generation && Date.now() - kept.at < KEPT_MAX_MS) {
+        queueMicrotask(() => answer(fn, kept.data));
+        return;
+      }
       preparedRead<{ data: string | null }>(sequelize, 'SELECT data FROM sessions WHERE sid = ?', [sid]).then(([row]) => {
-        let data: session.SessionData | null;
-        try {
-          data = row?.data ? (JSON.parse(row.data) as session.SessionData) : null;
-        } catch (err) {
-          return fn(err);
+        // Only rows that exist are kept: a stream of made-up ids must not fill the memory.
+        if (row?.data && sessionWriteGeneration() === generation) {
+          if (keptSessions.size >= 10_000) keptSessions.clear();
+          keptSessions.set(sid, { generation, at: Date.now(), data: row.data });
         }
-        fn(null, data);
+        answer(fn, row?.data);
       }, fn);
     }
   }

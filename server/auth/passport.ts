@@ -3,6 +3,7 @@ import { Strategy as LocalStrategy } from 'passport-local';
 import type { Role } from '@shared/schemas/user';
 import { User } from '../db/models/user';
 import { preparedRead } from '../db/prepared-read';
+import { keptUntilWrite } from '../db/kept';
 import { dummyVerify, hashCost, hashPassword, verifyPassword } from './password';
 
 export function configurePassport(scryptLogN: number): PassportStatic {
@@ -28,13 +29,17 @@ export function configurePassport(scryptLogN: number): PassportStatic {
     }),
   );
   p.serializeUser((user, done) => done(null, user.id));
-  // Every signed-in request comes through here: one prepared statement reads what toPublic() gives.
+  // Every signed-in request comes through here: one prepared statement reads what toPublic() gives,
+  // kept until anything is written (server/db/kept.ts), so a deactivation or a change of role
+  // holds from the next request on.
   p.deserializeUser(async (id: number, done) => {
     try {
-      const [row] = await preparedRead<{ id: number; name: string; email: string; role: Role; active: number }>(
-        User.sequelize!,
-        'SELECT id, name, email, role, active FROM users WHERE id = ?',
-        [id],
+      const [row] = await keptUntilWrite(User.sequelize!, `user ${id}`, () =>
+        preparedRead<{ id: number; name: string; email: string; role: Role; active: number }>(
+          User.sequelize!,
+          'SELECT id, name, email, role, active FROM users WHERE id = ?',
+          [id],
+        ),
       );
       done(null, row && row.active ? { ...row, active: true } : false);
     } catch (err) {

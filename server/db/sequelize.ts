@@ -3,6 +3,7 @@ import { AsyncLocalStorage } from 'node:async_hooks';
 import fs from 'node:fs';
 import path from 'node:path';
 import { cachingSqlite3 } from './sqlite-column-cache';
+import { watchOtherWriters } from './kept';
 
 /**
  * How long a statement waits for another connection's write lock before SQLite answers SQLITE_BUSY.
@@ -110,5 +111,6 @@ export async function openDatabase(databasePath: string): Promise<Sequelize> {
   preparePerConnection(sequelize);
   serialiseWrites(sequelize);
   await sequelize.query('PRAGMA journal_mode = WAL;');
+  watchOtherWriters(sequelize);
   return sequelize;
 }

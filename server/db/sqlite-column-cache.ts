@@ -1,4 +1,5 @@
 import sqlite3 from 'sqlite3';
+import { noteWrite, writeKind } from './kept';
 
 type Callback = (err: Error | null, rows: unknown[]) => void;
 
@@ -54,6 +55,25 @@ class CachingDatabase extends sqlite3.Database {
     if (typeof sql === 'string' && CHANGES_SCHEMA.test(sql)) this.columnInfo.clear();
   }
 
+  /**
+   * Answers kept until a write (server/db/kept.ts) are dropped before a statement that may change
+   * data runs and again once it has finished (for a COMMIT, once its writes are visible to others).
+   */
+  private watchWrite(sql: unknown, rest: unknown[]): unknown[] {
+    if (typeof sql !== 'string') return rest;
+    const kind = writeKind(sql);
+    if (kind === 'read') return rest;
+    noteWrite(kind);
+    const last = rest.length - 1;
+    const callback = rest[last];
+    if (typeof callback !== 'function') return rest;
+    const after = function (this: unknown, ...args: unknown[]) {
+      noteWrite(kind);
+      return (callback as (...a: unknown[]) => unknown).apply(this, args);
+    };
+    return [...rest.slice(0, last), after];
+  }
+
   override all(sql: string, ...rest: unknown[]): this {
     const match = TABLE_INFO.exec(sql);
     const callback = rest[rest.length - 1];
@@ -77,17 +97,17 @@ class CachingDatabase extends sqlite3.Database {
       });
     }
     this.forgetIfSchemaChanges(sql);
-    return (super.all as (...args: unknown[]) => this)(sql, ...rest);
+    return (super.all as (...args: unknown[]) => this)(sql, ...this.watchWrite(sql, rest));
   }
 
   override run(sql: string, ...rest: unknown[]): this {
     this.forgetIfSchemaChanges(sql);
-    return (super.run as (...args: unknown[]) => this)(sql, ...rest);
+    return (super.run as (...args: unknown[]) => this)(sql, ...this.watchWrite(sql, rest));
   }
 
   override exec(sql: string, ...rest: unknown[]): this {
     this.forgetIfSchemaChanges(sql);
-    return (super.exec as (...args: unknown[]) => this)(sql, ...rest);
+    return (super.exec as (...args: unknown[]) => this)(sql, ...this.watchWrite(sql, rest));
   }
 }
 

@@ -5,6 +5,9 @@
 import { usToUkText } from '../sizing/stitch-names';
 import { CORNER_STITCHES } from './row-ends';
 import type { RoundMode } from './round';
+import { BORDER_NAMES, type BorderId } from './library-names';
+
+const named = (id: BorderId) => ({ id, name: BORDER_NAMES[id] });
 
 export type Difficulty = 1 | 2 | 3;
 
@@ -54,8 +57,7 @@ export const BORDER_YARN_ADVICE = {
 
 export const BORDER_LIBRARY: readonly BorderPattern[] = [
   {
-    id: 'five-dc-shell',
-    name: 'Five-dc shell',
+    ...named('five-dc-shell'),
     multiple: 4,
     offset: 1,
     lead: 1,
@@ -71,8 +73,7 @@ export const BORDER_LIBRARY: readonly BorderPattern[] = [
       'skip next st, sc in next st; rep from * around, working the last sc as a sl st into the first sc. Fasten off.',
   },
   {
-    id: 'picot-tipped-shell',
-    name: 'Shell with picot tips',
+    ...named('picot-tipped-shell'),
     multiple: 4,
     offset: 1,
     lead: 1,
@@ -89,8 +90,7 @@ export const BORDER_LIBRARY: readonly BorderPattern[] = [
       'working the last sc as a sl st into the first sc. Fasten off.',
   },
   {
-    id: 'crab-stitch-edge',
-    name: 'Crab-stitch edge',
+    ...named('crab-stitch-edge'),
     multiple: 1,
     offset: 0,
     lead: 0,
@@ -106,8 +106,7 @@ export const BORDER_LIBRARY: readonly BorderPattern[] = [
       'in your right hand), work reverse sc in each st around. Sl st in first st to join. Fasten off.',
   },
   {
-    id: 'plain-hdc-round',
-    name: 'Plain hdc round',
+    ...named('plain-hdc-round'),
     multiple: 1,
     offset: 0,
     lead: 0,
@@ -123,8 +122,7 @@ export const BORDER_LIBRARY: readonly BorderPattern[] = [
       'st around, working 3 hdc in the middle st of each corner. Sl st in first hdc to join.',
   },
   {
-    id: 'wide-scallop',
-    name: 'Wide scallop',
+    ...named('wide-scallop'),
     multiple: 6,
     offset: 1,
     lead: 1,
@@ -142,8 +140,7 @@ export const BORDER_LIBRARY: readonly BorderPattern[] = [
       'skip next 2 sts, sc in next st; rep from * around, working the last sc as a sl st into the first sc. Fasten off.',
   },
   {
-    id: 'picot-ribbon',
-    name: 'Picot ribbon',
+    ...named('picot-ribbon'),
     multiple: 3,
     offset: 1,
     lead: 1,
@@ -159,8 +156,7 @@ export const BORDER_LIBRARY: readonly BorderPattern[] = [
       'sl st in 3rd ch from hook, sc in next st; rep from * around. Sl st in first sc to join. Fasten off.',
   },
   {
-    id: 'open-v-lattice',
-    name: 'Open V lattice',
+    ...named('open-v-lattice'),
     multiple: 2,
     offset: 0,
     lead: 0,
@@ -177,8 +173,7 @@ export const BORDER_LIBRARY: readonly BorderPattern[] = [
       'beginning ch-4. Fasten off.',
   },
   {
-    id: 'bobble-dots',
-    name: 'Bobble dots',
+    ...named('bobble-dots'),
     multiple: 4,
     offset: 0,
     lead: 0,

@@ -4,6 +4,7 @@ import { IdParamSchema } from '@shared/schemas/user';
 import { BlanketCreateSchema, BlanketListQuerySchema, BlanketUpdateSchema, type BlanketListQuery } from '@shared/schemas/blanket-log';
 import type { RouteDef } from '../route-table';
 import { blanketDetail, createBlanket, listBlankets, updateBlanket } from './blankets.service';
+import { keptJson } from '../../lib/kept-json';
 
 export function blanketRoutes(sequelize: Sequelize): RouteDef[] {
   return [
@@ -11,9 +12,7 @@ export function blanketRoutes(sequelize: Sequelize): RouteDef[] {
       method: 'get', path: '/api/blankets', access: 'signed-in', summary: 'One page of blankets (your own, or everyone\'s for staff), filtered, searched and sorted',
       handlers: [
         validate({ query: BlanketListQuerySchema }),
-        async (req, res) => {
-          res.json(await listBlankets(req.user!, req.query as unknown as BlanketListQuery));
-        },
+        keptJson({ per: 'user' }, (req) => listBlankets(req.user!, req.query as unknown as BlanketListQuery)),
       ],
     },
     {

@@ -2,6 +2,8 @@ import type { Transaction } from 'sequelize';
 import { Drive } from '../../db/models/drive';
 import { nowMs } from '../../lib/clock';
 import { preparedRead } from '../../db/prepared-read';
+import { keptUntilWrite } from '../../db/kept';
+import { DateTime } from 'luxon';
 import { todayIn } from '@shared/scheduling/slots';
 
 /** The fallback when no drive row exists yet (a fresh database before seeding). */
@@ -10,10 +12,12 @@ export const DEFAULT_TIME_ZONE = 'Europe/London';
 /** The drive's IANA time zone: every slot, booking time and "today" is read in it. */
 export async function driveZone(transaction?: Transaction): Promise<string> {
   if (!transaction) {
-    // Most reads ask for the day; outside a transaction a prepared statement answers it for a
-    // fraction of a model query's cost (server/db/prepared-read.ts).
-    const [row] = await preparedRead<{ timeZone: string }>(Drive.sequelize!, 'SELECT timeZone FROM drives ORDER BY id ASC LIMIT 1', []);
-    return row?.timeZone ?? DEFAULT_TIME_ZONE;
+    // Most reads ask for the day; outside a transaction the zone is kept until the next write
+    // (server/db/kept.ts) and read through a prepared statement (server/db/prepared-read.ts).
+    return keptUntilWrite(Drive.sequelize!, 'drive-zone', async () => {
+      const [row] = await preparedRead<{ timeZone: string }>(Drive.sequelize!, 'SELECT timeZone FROM drives ORDER BY id ASC LIMIT 1', []);
+      return row?.timeZone ?? DEFAULT_TIME_ZONE;
+    });
   }
   const drive = await Drive.findOne({ order: [['id', 'ASC']], attributes: ['id', 'timeZone'], transaction });
   return drive?.timeZone ?? DEFAULT_TIME_ZONE;
@@ -43,7 +47,21 @@ export interface DriveNow {
 export async function driveNow(transaction?: Transaction): Promise<DriveNow> {
   const zone = await driveZone(transaction);
   const at = nowMs();
-  return { zone, nowMs: at, today: todayIn(zone, at) };
+  return { zone, nowMs: at, today: dayAt(zone, at) };
+}
+
+/**
+ * The drive's date at an instant, remembered with the instants its day starts and ends: most
+ * requests ask for it, and working it out through the time-zone rules each time was a measurable
+ * part of a kept answer's cost.
+ */
+let lastDay: { zone: string; from: number; to: number; today: string } | null = null;
+function dayAt(zone: string, at: number): string {
+  if (lastDay && lastDay.zone === zone && at >= lastDay.from && at < lastDay.to) return lastDay.today;
+  const local = DateTime.fromMillis(at, { zone });
+  const today = todayIn(zone, at);
+  lastDay = { zone, from: local.startOf('day').toMillis(), to: local.plus({ days: 1 }).startOf('day').toMillis(), today };
+  return today;
 }
 
 export async function driveToday(transaction?: Transaction): Promise<string> {

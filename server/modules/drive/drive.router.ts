@@ -7,6 +7,7 @@ import { driveProgress } from './progress.service';
 import { driveGlance, glanceWeeks } from './glance.service';
 import { validate } from '../../middleware/validate';
 import { GlanceWeeksQuerySchema, type GlanceWeeksQuery } from '@shared/schemas/glance';
+import { keptJson } from '../../lib/kept-json';
 
 export function driveRoutes(config: Pick<Config, 'tiles'>): RouteDef[] {
   return [
@@ -23,9 +24,7 @@ export function driveRoutes(config: Pick<Config, 'tiles'>): RouteDef[] {
     {
       method: 'get', path: '/api/drive/progress', access: ['organiser', 'coordinator'], summary: 'Wanted, pledged, finished, in hand and assigned per recipient; blankets per status',
       handlers: [
-        async (_req, res) => {
-          res.json({ progress: await driveProgress() });
-        },
+        keptJson({ per: 'role' }, async () => ({ progress: await driveProgress() })),
       ],
     },
     {

@@ -4,7 +4,8 @@ import { Need } from '../../db/models/need';
 import { Recipient } from '../../db/models/recipient';
 import type { BlanketStatus } from '@shared/schemas/blanket';
 import type { DriveProgress } from '@shared/schemas/pledge';
-import { keptUntilWrite, needCounts } from '../pledges/need-counts';
+import { needCounts } from '../pledges/need-counts';
+import { keptUntilWrite } from '../../db/kept';
 import { driveToday } from '../bookings/drive-clock';
 
 /**
@@ -31,8 +32,9 @@ export async function driveProgress(): Promise<DriveProgress> {
     row.assigned += c.assigned;
     rows.set(n.recipientId, row);
   }
-  // Walks every blanket of the drive; kept until a blanket (or pledge, or need) is written.
+  // Walks every blanket of the drive; kept until anything is written.
   const byStatus = await keptUntilWrite(
+    Blanket.sequelize!,
     'blankets-by-status',
     async () =>
       (await Blanket.findAll({

@@ -4,7 +4,9 @@ import { validate } from '../../middleware/validate';
 import { IdParamSchema } from '@shared/schemas/user';
 import { BlanketCodeParamSchema, InspectionBodySchema, IntakeBodySchema, IntakeQueueQuerySchema, TagsQuerySchema } from '@shared/schemas/intake';
 import type { RouteDef } from '../route-table';
+import type { IntakeQueue } from '@shared/schemas/intake-views';
 import * as service from './intake.service';
+import { keptJson } from '../../lib/kept-json';
 
 const STAFF = ['organiser', 'coordinator'] as const;
 
@@ -55,11 +57,19 @@ export function intakeRoutes(ctx: { sequelize: Sequelize; publicUrl: string }): 
       method: 'get', path: '/api/intake/queue', access: [...STAFF], summary: 'What arrived at a site on a day and what waits for inspection',
       handlers: [
         validate({ query: IntakeQueueQuerySchema }),
-        async (req, res) => {
-          const q = req.query as unknown as z.infer<typeof IntakeQueueQuerySchema>;
-          res.json({ queue: await service.queue(q) });
-        },
+        // Kept until a write, or until the first booked visit still expected has ended (it then
+        // shows as not arrived).
+        keptJson<{ queue: IntakeQueue }>({ per: 'role', until: (a) => firstExpectedEnd(a.queue.bookedArrivals) }, async (req) => ({
+          queue: await service.queue(req.query as unknown as z.infer<typeof IntakeQueueQuerySchema>),
+        })),
       ],
     },
   ];
+}
+
+/** When the earliest booked visit still expected ends (Infinity when none is). */
+function firstExpectedEnd(arrivals: Array<{ end: string; arrival: string }>): number {
+  let first = Infinity;
+  for (const a of arrivals) if (a.arrival === 'expected') first = Math.min(first, Date.parse(a.end));
+  return first;
 }

@@ -1,8 +1,6 @@
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import { Need } from '../../db/models/need';
-import { Pledge } from '../../db/models/pledge';
-import { Blanket } from '../../db/models/blanket';
-import { Assignment } from '../../db/models/assignment';
+import { keptUntilWrite } from '../../db/kept';
 import { ASSIGNED_STATUSES, FINISHED_STATUSES, WITH_ORGANISERS } from '@shared/blankets/status';
 import type { NeedCounts } from '@shared/schemas/pledge';
 
@@ -25,87 +23,9 @@ export async function needCounts(
   const withBlankets = opts.blankets !== false;
   // Inside a transaction the caller may be looking at its own uncommitted writes: no cache.
   if (opts.transaction) return countNeeds(needIds, withBlankets, opts.transaction);
-  const key = `${withBlankets ? 'b' : 'p'}:${[...needIds].sort((a, b) => a - b).join(',')}`;
-  return kept(key, () => countNeeds(needIds, withBlankets));
-}
-
-/**
- * Another figure drawn from needs, pledges and blankets (the drive's blankets per status, say),
- * kept by the same rule as the need counts: until any of those is written, and a few seconds at most.
- */
-export function keptUntilWrite<T>(key: string, compute: () => Promise<T>): Promise<T> {
-  return kept(`x:${key}`, compute);
-}
-
-async function kept<T>(key: string, compute: () => Promise<T>): Promise<T> {
-  const sequelize = Need.sequelize!;
-  watchWrites(sequelize);
-  const memo = memoFor(sequelize);
-  const hit = memo.entries.get(key);
-  if (hit && hit.generation === memo.generation && Date.now() - hit.at < MEMO_MS) return hit.counts as T;
-  const generation = memo.generation;
-  // Requests that arrive while the same figure is being counted, with nothing written since, share
-  // that count instead of each walking the blankets again (under load they came fifty at a time).
-  const running = memo.running.get(key);
-  if (running && running.generation === generation) return running.promise as Promise<T>;
-  const promise = compute();
-  memo.running.set(key, { generation, promise });
-  try {
-    const value = await promise;
-    // A write that committed while we counted makes this answer stale: hand it out, don't keep it.
-    if (memo.generation === generation) {
-      if (memo.entries.size >= 200) memo.entries.clear();
-      memo.entries.set(key, { generation, at: Date.now(), counts: value });
-    }
-    return value;
-  } finally {
-    if (memo.running.get(key)?.promise === promise) memo.running.delete(key);
-  }
-}
-
-/**
- * Counts are asked for on every view of "What's needed" and the recipient pages, and change only
- * when a pledge, a blanket or a need is written. So answers are kept per database until any such
- * write (the models' hooks, and again when the writing transaction commits), and for at most a few
- * seconds in case something writes past the models.
- */
-const MEMO_MS = 5_000;
-interface Memo {
-  generation: number;
-  entries: Map<string, { generation: number; at: number; counts: unknown }>;
-  running: Map<string, { generation: number; promise: Promise<unknown> }>;
-}
-const memos = new WeakMap<Sequelize, Memo>();
-const watched = new WeakMap<Sequelize, Set<unknown>>();
-
-function memoFor(sequelize: Sequelize): Memo {
-  let m = memos.get(sequelize);
-  if (!m) memos.set(sequelize, (m = { generation: 0, entries: new Map(), running: new Map() }));
-  return m;
-}
-
-const WRITE_HOOKS = ['afterCreate', 'afterUpdate', 'afterDestroy', 'afterSave', 'afterUpsert', 'afterBulkCreate', 'afterBulkUpdate', 'afterBulkDestroy'] as const;
-
-function watchWrites(sequelize: Sequelize) {
-  const seen = watched.get(sequelize) ?? new Set<unknown>();
-  watched.set(sequelize, seen);
-  for (const model of [Need, Pledge, Blanket, Assignment]) {
-    // Models are initialised again for each database a test opens; watch each initialisation once.
-    const id = model.options;
-    if (seen.has(id)) continue;
-    seen.add(id);
-    const forget = (...args: unknown[]) => {
-      const memo = memoFor(sequelize);
-      memo.generation += 1;
-      memo.entries.clear();
-      const options = args.find((a): a is { transaction?: Transaction | null } => typeof a === 'object' && a !== null && 'transaction' in a);
-      options?.transaction?.afterCommit(() => {
-        memo.generation += 1;
-        memo.entries.clear();
-      });
-    };
-    for (const hook of WRITE_HOOKS) (model as unknown as { addHook: (h: string, fn: (...a: unknown[]) => void) => void }).addHook(hook, forget);
-  }
+  // Kept until anything is written (server/db/kept.ts): every page and chart asks for these.
+  const key = `need-counts:${withBlankets ? 'b' : 'p'}:${[...needIds].sort((a, b) => a - b).join(',')}`;
+  return keptUntilWrite(Need.sequelize!, key, () => countNeeds(needIds, withBlankets));
 }
 
 async function countNeeds(needIds: readonly number[], withBlankets: boolean, transaction?: Transaction): Promise<Map<number, NeedCounts>> {

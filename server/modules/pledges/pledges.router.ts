@@ -5,24 +5,21 @@ import { PledgeCreateSchema, PledgeListQuerySchema, PledgeUpdateSchema, type Ple
 import type { RouteDef } from '../route-table';
 import { cancelPledge, createPledge, listPledges, pledgeView, updatePledge, visiblePledge } from './pledges.service';
 import { listOpenNeeds } from './needs.service';
+import { keptJson } from '../../lib/kept-json';
 
 export function pledgeRoutes(sequelize: Sequelize): RouteDef[] {
   return [
     {
       method: 'get', path: '/api/needs', access: 'signed-in', summary: 'Open needs with pledged and still-wanted counts',
       handlers: [
-        async (req, res) => {
-          res.json({ needs: await listOpenNeeds(req.user!) });
-        },
+        keptJson({ per: 'user' }, async (req) => ({ needs: await listOpenNeeds(req.user!) })),
       ],
     },
     {
       method: 'get', path: '/api/pledges', access: 'signed-in', summary: 'One page of pledges (your own, or everyone\'s for staff), filtered, searched and sorted',
       handlers: [
         validate({ query: PledgeListQuerySchema }),
-        async (req, res) => {
-          res.json(await listPledges(req.user!, req.query as unknown as PledgeListQuery));
-        },
+        keptJson({ per: 'user' }, (req) => listPledges(req.user!, req.query as unknown as PledgeListQuery)),
       ],
     },
     {

@@ -13,6 +13,7 @@ import {
 } from '@shared/schemas/recipient';
 import type { RouteDef } from '../route-table';
 import * as service from './recipients.service';
+import { keptJson } from '../../lib/kept-json';
 
 const MANAGERS = ['organiser', 'coordinator'] as const;
 
@@ -26,10 +27,10 @@ export function recipientRoutes(ctx: { sequelize: Sequelize }): RouteDef[] {
       method: 'get', path: '/api/recipients', access: 'signed-in', summary: 'Recipients with their needs and guidelines',
       handlers: [
         validate({ query: RecipientListQuerySchema }),
-        async (req, res) => {
+        keptJson({ per: 'role' }, async (req) => {
           const q = req.query as unknown as z.infer<typeof RecipientListQuerySchema>;
-          res.json({ recipients: await service.listRecipients(req.user!.role, q.active) });
-        },
+          return { recipients: await service.listRecipients(req.user!.role, q.active) };
+        }),
       ],
     },
     {

@@ -13,7 +13,7 @@ import { useBlanket } from '@/features/blankets/api/get-blanket';
 import { useMyPlans } from '@/features/blankets/api/get-my-plans';
 import { useUpdateBlanket } from '@/features/blankets/api/update-blanket';
 import { BlanketForm } from '@/features/blankets/components/blanket-form';
-import { toUpdatePayload, type BlanketFormValues } from '@/features/blankets/components/blanket-form-schema';
+import { toUpdatePayload, type BlanketFormValues } from '@/features/blankets/components/blanket-form-values';
 import type { RecipientBrief } from '@shared/schemas/pledge';
 import { pickBlanketFields } from '@shared/schemas/blanket-values';
 

@@ -16,7 +16,7 @@ import { useMyPlans } from '@/features/blankets/api/get-my-plans';
 import { useCreateBlanket } from '@/features/blankets/api/create-blanket';
 import { uploadPhotos } from '@/features/blankets/api/upload-photos';
 import { BlanketForm } from '@/features/blankets/components/blanket-form';
-import { toCreatePayload, type BlanketFormValues } from '@/features/blankets/components/blanket-form-schema';
+import { toCreatePayload, type BlanketFormValues } from '@/features/blankets/components/blanket-form-values';
 import { MAX_PHOTOS_PER_BLANKET } from '@shared/schemas/blanket-log-values';
 import type { PledgeView, RecipientBrief } from '@shared/schemas/pledge';
 import type { PlanListItem } from '@shared/schemas/plan';

@@ -1,6 +1,5 @@
-import { useState, type ReactNode } from 'react';
+import { lazy, Suspense, useState, type ReactNode } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { Card } from '@/components/ui/card';
 import { Button } from '@/components/ui/button';
 import { Alert } from '@/components/ui/alert';
@@ -12,17 +11,23 @@ import { formatDay } from '@/components/ui/format-day';
 import { cn } from '@/components/ui/cn';
 import { BODY_STITCHES, FEATURES, FIBRES, YARN_WEIGHTS } from '@shared/schemas/blanket-values';
 import type { PledgeView, RecipientBrief } from '@shared/schemas/pledge';
-import { BORDER_LIBRARY } from '@shared/border/library';
+import { BORDER_CHOICES } from '@shared/border/library-names';
 import { capitalise, featureLabel, fibreLabel } from '@shared/guidelines/wording';
 import { sizeCategoryRow } from '@shared/guidelines/size-categories';
 import type { PlanListItem } from '@shared/schemas/plan';
-import { BlanketFormSchema, SERVER_FIELD_RENAMES, guidelineFields, inUnit, cmFrom, type BlanketFormValues } from './blanket-form-schema';
+import { FORM_FIELDS, SERVER_FIELD_RENAMES, guidelineFields, inUnit, cmFrom, type BlanketFormValues } from './blanket-form-values';
+import { lazyZodResolver } from '@/lib/lazy-zod-resolver';
 import { BODY_STITCH_LABELS, yarnWeightLabel, NO_LIBRARY_BORDER } from './labels';
 import { useSelfCheck } from '../hooks/use-self-check';
-import { SelfCheckPanel } from './self-check-panel';
+import { Cautions } from '@/components/ui/cautions';
+import { CHECK_PENDING, SelfCheckFrame } from './self-check-frame';
 import { PhotoPicker, photoProblems } from './photo-picker';
 
-const FORM_FIELDS = Object.keys(BlanketFormSchema.shape);
+/** The panel comes with the check it shows, a moment after the form; the cautions are there from the start. */
+const SelfCheckPanel = lazy(() => import('./self-check-panel').then((m) => ({ default: m.SelfCheckPanel })));
+
+/** The form's schema (and zod with it) loads right after the form paints; a submit waits for it. */
+const resolver = lazyZodResolver<BlanketFormValues>(() => import('./blanket-form-schema').then((m) => m.BlanketFormSchema));
 
 function Section({ title, children, hint }: { title: string; children: ReactNode; hint?: string }) {
   return (
@@ -62,7 +67,7 @@ interface Props {
 /** The blanket log: every field from the issue, with the self-check running as the maker types. */
 export function BlanketForm({ mode, pledges, defaultValues, otherRecipients, plans, firstName, photoRoom = 0, onSubmit, uploadProgress, submitLabel, notice }: Props) {
   const { register, handleSubmit, formState, setError, control, getValues, setValue } = useForm<BlanketFormValues>({
-    resolver: zodResolver(BlanketFormSchema),
+    resolver,
     defaultValues,
   });
   const [photos, setPhotos] = useState<File[]>([]);
@@ -212,7 +217,7 @@ export function BlanketForm({ mode, pledges, defaultValues, otherRecipients, pla
               {({ id, describedBy, invalid }) => (
                 <Select id={id} aria-describedby={describedBy} aria-invalid={invalid} {...register('borderId')}>
                   <option value="">{NO_LIBRARY_BORDER}</option>
-                  {BORDER_LIBRARY.map((b) => (
+                  {BORDER_CHOICES.map((b) => (
                     <option key={b.id} value={b.id}>
                       {b.name}
                     </option>
@@ -289,7 +294,16 @@ export function BlanketForm({ mode, pledges, defaultValues, otherRecipients, pla
 
       <aside className="lg:col-start-3 lg:row-span-2 lg:row-start-1">
         <div className="space-y-4 lg:sticky lg:top-4">
-          <SelfCheckPanel outcome={outcome} cautions={cautions} />
+          <Suspense
+            fallback={
+              <SelfCheckFrame>
+                <p className="text-ink-soft">{CHECK_PENDING}</p>
+                {cautions.length > 0 && <Cautions cautions={cautions} compact />}
+              </SelfCheckFrame>
+            }
+          >
+            <SelfCheckPanel outcome={outcome} cautions={cautions} />
+          </Suspense>
         </div>
       </aside>
 

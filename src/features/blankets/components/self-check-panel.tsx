@@ -1,10 +1,10 @@
-import { CheckCircle2, ClipboardCheck, Wrench, XCircle } from 'lucide-react';
+import { CheckCircle2, Wrench, XCircle } from 'lucide-react';
 import { Cautions } from '@/components/ui/cautions';
-import { cn } from '@/components/ui/cn';
 import { joinWords } from '@shared/guidelines/wording';
 import type { Verdict } from '@shared/schemas/guidelines';
 import type { Caution } from '@shared/schemas/pledge';
 import type { SelfCheck } from '../hooks/use-self-check';
+import { CHECK_PENDING, SelfCheckFrame } from './self-check-frame';
 
 /** The check's verdicts as a maker hears them at home, before anything is decided at intake. */
 const VERDICT_FOR_MAKER: Record<Verdict, string> = {
@@ -34,10 +34,8 @@ export function SelfCheckPanel({
   notes?: string[];
 }) {
   return (
-    <section aria-labelledby="self-check-title" aria-live="polite" className={cn('space-y-4 rounded-2xl border-2 border-heather-300 bg-white p-5', className)} data-testid="self-check">
-      <h2 id="self-check-title" className="flex items-center gap-2 text-xl font-bold">
-        <ClipboardCheck className="size-6 text-heather-700" aria-hidden /> {viewer === 'maker' ? 'Self-check' : 'Guideline check on what the maker logged'}
-      </h2>
+    <SelfCheckFrame viewer={viewer} className={className}>
+      {outcome.state === 'pending' && <p className="text-ink-soft">{CHECK_PENDING}</p>}
       {outcome.state === 'incomplete' && <p className="text-ink-soft">Fill in {joinWords(outcome.missing)} and the check will tell you whether it meets the guidelines.</p>}
 
       {outcome.state === 'checked' && outcome.result.ok && (
@@ -88,6 +86,6 @@ export function SelfCheckPanel({
           </p>
         ))}
       {cautions.length > 0 && <Cautions cautions={cautions} compact />}
-    </section>
+    </SelfCheckFrame>
   );
 }

@@ -1,49 +1,25 @@
 import { useMemo } from 'react';
-import { BlanketFieldsSchema, type BlanketFields } from '@shared/schemas/blanket';
+import type { BlanketFields } from '@shared/schemas/blanket';
 import type { GuidelineCheckResult } from '@shared/schemas/guidelines';
 import type { RecipientBrief } from '@shared/schemas/pledge';
-import { check, evaluate } from '@shared/guidelines/check';
+import { preload, usePreloaded } from '@/lib/lazy-zod-resolver';
 
 export type SelfCheck =
+  /** The check itself is still loading, a moment after the form has painted. */
+  | { state: 'pending' }
   | { state: 'incomplete'; missing: string[] }
   | { state: 'checked'; recipient: RecipientBrief; result: GuidelineCheckResult }
   | { state: 'anywhere'; fits: Array<{ name: string }>; nearly: Array<{ name: string }> };
 
-const FIELD_WORDS: Record<string, string> = {
-  widthCm: 'the width',
-  lengthCm: 'the length',
-  yarnWeight: 'the yarn weight',
-  fibres: 'the fibres',
-  machineWashable: 'whether it is machine washable',
-  smokeFree: 'whether your home is smoke-free',
-  petFree: 'whether your home is pet-free',
-};
+const selfCheck = preload(() => import('./self-check'));
 
-/**
- * The same guideline check the organisers run at intake, run here on what the maker has typed so
- * far. With no recipient yet ("wherever it's needed most") it says which recipients would take it.
- */
-export function runSelfCheck(fields: Partial<BlanketFields>, recipient: RecipientBrief | null, others: RecipientBrief[]): SelfCheck {
-  const parsed = BlanketFieldsSchema.safeParse(fields);
-  if (!parsed.success) {
-    const missing = [...new Set(parsed.error.issues.map((i) => FIELD_WORDS[String(i.path[0])] ?? String(i.path[0])))];
-    return { state: 'incomplete', missing };
-  }
-  const blanket = parsed.data;
-  const pool = others.map((r) => ({ recipientId: r.id, name: r.name, guidelines: r.guidelines }));
-  if (recipient) return { state: 'checked', recipient, result: check(blanket, recipient.guidelines, pool, { recipientId: recipient.id }) };
-  const fits: Array<{ name: string }> = [];
-  const nearly: Array<{ name: string }> = [];
-  for (const r of others) {
-    const reasons = evaluate(blanket, r.guidelines).reasons;
-    if (reasons.length === 0) fits.push(r);
-    else if (reasons.every((x) => x.fix !== undefined)) nearly.push(r);
-  }
-  return { state: 'anywhere', fits, nearly };
-}
-
+/** The self-check on what the maker has typed so far, once the check has loaded (see ./self-check.ts). */
 export function useSelfCheck(fields: Partial<BlanketFields>, recipient: RecipientBrief | null, others: RecipientBrief[]): SelfCheck {
+  const loaded = usePreloaded(selfCheck);
   const key = JSON.stringify(fields);
-  // eslint-disable-next-line react-hooks/exhaustive-deps -- `key` stands for `fields`, which is a fresh object each render
-  return useMemo(() => runSelfCheck(fields, recipient, others), [key, recipient, others]);
+  return useMemo(
+    (): SelfCheck => (loaded ? loaded.runSelfCheck(fields, recipient, others) : { state: 'pending' }),
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- `key` stands for `fields`, which is a fresh object each render
+    [key, recipient, others, loaded],
+  );
 }
