@@ -83,14 +83,16 @@ function pageQuery(inner: { fields: Record<SourceField, string>; from: string; w
   // page again cost a fifth of the query. readPage checks the order and sorts only if it must.
   return {
     sql: `SELECT json_group_array(json_array(${MANIFEST_SOURCE_FIELDS.map((f) => `p.${f}`).join(', ')})) AS page
-    FROM (SELECT ${select} FROM ${inner.from} WHERE ${inner.where} ORDER BY ${inner.orderBy.map((c) => `${c} ASC`).join(', ')} LIMIT ?) p`,
+    FROM (SELECT ${select} FROM ${inner.from} WHERE ${inner.where} ORDER BY ${inner.orderBy.map((c) => `${inner.fields[c]} ASC`).join(', ')} LIMIT ?) p`,
     key: inner.orderBy.map((f) => MANIFEST_SOURCE_FIELDS.indexOf(f)),
   };
 }
 
 /** A run's stop, rows keyed by (box, blanket) on the index that orders them. */
 const RUN_PAGE = pageQuery({
-  fields: fieldSql('?', '?'),
+  // The blanket's id from run_blankets, so the ORDER BY is the index's own order: named from
+  // blankets, SQLite sorted every page again in a temporary tree.
+  fields: { ...fieldSql('?', '?'), blanketId: 'rb.blanketId' },
   from: `run_blankets rb JOIN blankets b ON b.id = rb.blanketId ${CHECKED_JOIN}`,
   where: 'rb.stopId = ? AND (rb.box, rb.blanketId) > (?, ?)',
   orderBy: ['box', 'blanketId'],
