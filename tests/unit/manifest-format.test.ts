@@ -68,6 +68,11 @@ describe('manifest rows', () => {
     expect(r[MANIFEST_COLUMNS.indexOf('Checked on')]).toBe('');
   });
 
+  it("takes a run's date and the stop's place from the destination when the rows leave them out", () => {
+    const r = manifestRecord(row({ runDate: null, position: null }), { ...to, runDate: '2026-12-20', position: 4 });
+    expect(r.slice(0, 2)).toEqual(['2026-12-20', 4]);
+  });
+
   it('gives each row its own words when one shaper remembers them across a manifest', () => {
     const shape = manifestShaper();
     const col = (name: (typeof MANIFEST_COLUMNS)[number]) => MANIFEST_COLUMNS.indexOf(name);

@@ -24,8 +24,8 @@ export const MANIFEST_PAGE = 1000;
 
 /**
  * Each field of a page row (manifest-format's MANIFEST_SOURCE_FIELDS) as SQL over the page query's
- * tables. The run's date and the stop's position come in as parameters for a run (read once per
- * stop), and from the blanket's own run for a recipient.
+ * tables. A run's rows leave out the run's date and the stop's position (read once per stop and
+ * given to the shaper); a recipient's rows take them from each blanket's own run.
  */
 /**
  * A REAL column that holds a whole number is handed over as an INTEGER: the same value once parsed,
@@ -92,7 +92,8 @@ function pageQuery(inner: { fields: Record<SourceField, string>; from: string; w
 const RUN_PAGE = pageQuery({
   // The blanket's id from run_blankets, so the ORDER BY is the index's own order: named from
   // blankets, SQLite sorted every page again in a temporary tree.
-  fields: { ...fieldSql('?', '?'), blanketId: 'rb.blanketId' },
+  // The run's date and the stop's position are the same on every row: passed once, not per row.
+  fields: { ...fieldSql('NULL', 'NULL'), blanketId: 'rb.blanketId' },
   from: `run_blankets rb JOIN blankets b ON b.id = rb.blanketId ${CHECKED_JOIN}`,
   where: 'rb.stopId = ? AND (rb.box, rb.blanketId) > (?, ?)',
   orderBy: ['box', 'blanketId'],
@@ -169,9 +170,9 @@ async function* runPages(sequelize: Sequelize, runId: number, pageSize: number):
   );
   const shape = manifestShaper();
   for (const stop of stops) {
-    const to = { recipient: stop.recipient, address: stop.address };
+    const to = { recipient: stop.recipient, address: stop.address, runDate: stop.runDate, position: stop.position };
     const read = (after: ManifestSourceRow | null) =>
-      readPage(sequelize, RUN_PAGE, [stop.runDate, stop.position, stop.id, after?.[BOX] ?? 0, after?.[BLANKET_ID] ?? 0, pageSize]);
+      readPage(sequelize, RUN_PAGE, [stop.id, after?.[BOX] ?? 0, after?.[BLANKET_ID] ?? 0, pageSize]);
     for await (const rows of keysetPages(read, pageSize)) yield rows.map((r) => shape(r, to));
   }
 }
