@@ -6,7 +6,11 @@ import { BlanketEvent } from '../../server/db/models/blanket-event';
 import { Export, Run } from '../../server/db/models/run';
 import { Need } from '../../server/db/models/need';
 import { Pledge } from '../../server/db/models/pledge';
-import { driveToday } from '../../server/modules/bookings/drive-clock';
+import { DateTime } from 'luxon';
+import { driveToday, driveZone } from '../../server/modules/bookings/drive-clock';
+import { plainBlanket } from '../fixtures/blankets';
+import type { InferCreationAttributes } from 'sequelize';
+import { User } from '../../server/db/models/user';
 import { Recipient } from '../../server/db/models/recipient';
 import { GLANCE_STEPS, STEP_STATUSES, arrivalMoves, stepOf, weekAfter, weekOf, type GlanceStep } from '@shared/drive/glance';
 import type { BlanketStatus } from '@shared/schemas/blanket';
@@ -20,6 +24,7 @@ import type { DriveGlance } from '@shared/schemas/glance';
 let t: TestApp;
 let coordinator: Client;
 let glance: DriveGlance;
+let zone: string;
 
 beforeAll(async () => {
   t = await makeTestApp();
@@ -27,10 +32,12 @@ beforeAll(async () => {
   const res = await coordinator.get('/api/drive/glance');
   expect(res.status, JSON.stringify(res.body)).toBe(200);
   glance = res.body.glance as DriveGlance;
+  zone = await driveZone();
 });
 afterAll(async () => t.close());
 
-const day = (d: Date) => d.toISOString().slice(0, 10);
+/** The drive's local day of an instant (decision 0015), counted here with luxon as a second opinion. */
+const day = (d: Date) => DateTime.fromJSDate(d, { zone }).toISODate()!;
 
 async function recount() {
   const blankets = await Blanket.findAll({ attributes: ['id', 'status', 'pledgeId', 'createdAt'], raw: true });
@@ -88,7 +95,7 @@ describe('the drive at a glance agrees with a recount of the demo drive', () => 
     const { pledges, events } = await recount();
     expect(glance.weeks.length).toBeGreaterThan(2);
     for (let i = 1; i < glance.weeks.length; i++) expect(glance.weeks[i]!.week).toBe(weekAfter(glance.weeks[i - 1]!.week));
-    expect(glance.weeks.at(-1)!.week).toBe(weekOf(day(new Date())));
+    expect(glance.weeks.at(-1)!.week).toBe(weekOf(await driveToday()));
     const reachedBy = new Map<string, Set<number>>();
     for (const e of events) {
       if (!e.toStatus) continue;
@@ -259,6 +266,46 @@ it('every status on the way to delivery belongs to exactly one step', () => {
   expect(new Set(all).size).toBe(all.length);
   expect(stepOf('in_progress')).toBeNull();
   expect(stepOf('declined')).toBeNull();
+});
+
+// Before the empty drive below: opening it rebinds the models to its own database.
+describe('weeks begin on the Monday of the drive\'s own zone', () => {
+  it('counts an arrival late on a UTC Sunday in the week that began that Monday in Auckland, list and figure alike', async () => {
+    const before = await driveZone();
+    const setZone = async (timeZone: string) => expect((await coordinator.put('/api/drive/clock', { timeZone })).status).toBe(200);
+    await setZone('Pacific/Auckland');
+    try {
+      // The Sunday before this Auckland week began, 12:00 UTC: Monday 00:00 or 01:00 in Auckland
+      // (UTC+12, or +13 in its summer), so a week earlier in UTC than in the drive's zone.
+      const monday = weekOf(await driveToday());
+      const atMs = Date.parse(`${monday}T12:00:00Z`) - 86_400_000;
+      expect(DateTime.fromMillis(atMs, { zone: 'Pacific/Auckland' }).toISODate()).toBe(monday);
+      const maker = (await User.findOne({ where: { email: 'maren@example.org' } }))!;
+      const blanket = await Blanket.create({ code: 'KL-ZONE', userId: maker.id, status: 'checked', ...plainBlanket() } as unknown as InferCreationAttributes<Blanket>);
+      await BlanketEvent.create({ blanketId: blanket.id, actorId: maker.id, kind: 'inspection', fromStatus: 'received', toStatus: 'checked', createdAt: new Date(atMs) });
+      const weeks = ((await coordinator.get('/api/drive/glance')).body.glance as DriveGlance).weeks;
+      const week = (w: string) => weeks.find((x) => x.week === w)?.reached.checked ?? 0;
+      const utcWeekBefore = new Date(Date.parse(`${monday}T00:00:00Z`) - 7 * 86_400_000).toISOString().slice(0, 10);
+      const { events } = await recount();
+      const checkedIn = (w: string) =>
+        new Set(
+          events
+            .filter((e) => e.toStatus === 'checked' && e.fromStatus === 'received' && weekOf(DateTime.fromJSDate(new Date(e.createdAt), { zone: 'Pacific/Auckland' }).toISODate()!) === w)
+            .map((e) => e.blanketId),
+        );
+      expect(checkedIn(monday).has(blanket.id)).toBe(true);
+      expect(week(monday)).toBe(checkedIn(monday).size);
+      expect(week(utcWeekBefore)).toBe(checkedIn(utcWeekBefore).size);
+      const list = await coordinator.get(`/api/blankets?reached=checked&from=${monday}&to=${weekAfter(monday)}&pageSize=100`);
+      expect(list.status, JSON.stringify(list.body)).toBe(200);
+      expect(list.body.total).toBe(week(monday));
+      expect((list.body.items as Array<{ code: string }>).map((b) => b.code)).toContain('KL-ZONE');
+      const earlier = await coordinator.get(`/api/blankets?reached=checked&from=${utcWeekBefore}&to=${monday}&pageSize=100`);
+      expect((earlier.body.items as Array<{ code: string }>).map((b) => b.code)).not.toContain('KL-ZONE');
+    } finally {
+      await setZone(before);
+    }
+  });
 });
 
 describe('a drive with nothing in it yet', () => {

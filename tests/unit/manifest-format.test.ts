@@ -8,6 +8,7 @@ import {
   type ManifestDestination,
   type ManifestSourceRow,
 } from '../../server/modules/runs/manifest-format';
+import { inKeyOrder } from '../../server/modules/runs/manifest.service';
 
 type Named = { [K in (typeof MANIFEST_SOURCE_FIELDS)[number]]: ManifestSourceRow[number] };
 const to: ManifestDestination = { recipient: 'Harbour Lantern Family Shelter', address: '4 Quay Row, Thimbleford' };
@@ -67,6 +68,11 @@ describe('manifest rows', () => {
     expect(r[MANIFEST_COLUMNS.indexOf('Checked on')]).toBe('');
   });
 
+  it("takes a run's date and the stop's place from the destination when the rows leave them out", () => {
+    const r = manifestRecord(row({ runDate: null, position: null }), { ...to, runDate: '2026-12-20', position: 4 });
+    expect(r.slice(0, 2)).toEqual(['2026-12-20', 4]);
+  });
+
   it('gives each row its own words when one shaper remembers them across a manifest', () => {
     const shape = manifestShaper();
     const col = (name: (typeof MANIFEST_COLUMNS)[number]) => MANIFEST_COLUMNS.indexOf(name);
@@ -102,5 +108,22 @@ describe('neutralise (OWASP CSV Injection)', () => {
 
   it.each([['-3'], ['-2.5'], ['+7'], ['plain text'], ['Matron = nice'], ['3-ply'], ['']])('leaves %j alone', (cell) => {
     expect(neutralise(cell)).toBe(cell);
+  });
+});
+
+describe('manifest pages in keyset order', () => {
+  const BOX = MANIFEST_SOURCE_FIELDS.indexOf('box');
+  const ID = MANIFEST_SOURCE_FIELDS.indexOf('blanketId');
+  it('leaves an ordered page as it came and sorts one that came otherwise, by box then blanket', () => {
+    const ordered = [row({ box: 1, blanketId: 9 }), row({ box: 2, blanketId: 3 }), row({ box: 2, blanketId: 7 })];
+    expect(inKeyOrder([...ordered], [BOX, ID])).toEqual(ordered);
+    const shuffled = [ordered[2]!, ordered[0]!, ordered[1]!];
+    expect(inKeyOrder(shuffled, [BOX, ID]).map((r) => [r[BOX], r[ID]])).toEqual([
+      [1, 9],
+      [2, 3],
+      [2, 7],
+    ]);
+    // A recipient's blankets on no run have no box; they are keyed by blanket alone.
+    expect(inKeyOrder([row({ box: null, blanketId: 5 }), row({ box: 3, blanketId: 4 })], [ID]).map((r) => r[ID])).toEqual([4, 5]);
   });
 });

@@ -2,7 +2,8 @@ import { Op, col, fn, literal, where as sqlWhere, type Order, type Transaction, 
 import { Blanket } from '../../db/models/blanket';
 import { BlanketEvent } from '../../db/models/blanket-event';
 import { STEP_STATUSES } from '@shared/drive/glance';
-import { arrivalIn, dayOf, needOfBlanket } from '../drive/glance-sql';
+import { arrivalIn, localDayOf, needOfBlanket, zoneSpans } from '../drive/glance-sql';
+import { driveZone } from '../bookings/drive-clock';
 import { Photo } from '../../db/models/photo';
 import { Pledge } from '../../db/models/pledge';
 import { Need } from '../../db/models/need';
@@ -37,6 +38,8 @@ import { uniqueBlanketCode } from './blanket-code';
 import type { Page } from '@shared/schemas/page';
 
 /** BlanketEvent.data is free-form JSON; the model's creation type can't say so. */
+/** A day in milliseconds, for the span of clock changes a date filter needs. */
+const DAY_MS = 86_400_000;
 const eventData = (v: unknown) => v as BlanketEvent['data'];
 
 type Loaded = Blanket & {
@@ -163,7 +166,11 @@ export async function listBlankets(actor: Actor, q: BlanketListQuery): Promise<P
   if (q.reached && q.from && q.to) {
     const from = Blanket.sequelize!.escape(q.from);
     const to = Blanket.sequelize!.escape(q.to);
-    and.push(literal(`EXISTS (SELECT 1 FROM blanket_events e WHERE e.blanketId = \`Blanket\`.\`id\` AND ${arrivalIn(q.reached, 'e')} AND ${dayOf('e.createdAt')} >= ${from} AND ${dayOf('e.createdAt')} < ${to})`));
+    // Days in the drive's zone, as the glance's weeks count them; at most ten years of clock changes.
+    const toMs = Date.parse(`${q.to}T00:00:00Z`) + 2 * DAY_MS;
+    const spans = zoneSpans(await driveZone(), Math.max(Date.parse(`${q.from}T00:00:00Z`) - 2 * DAY_MS, toMs - 3653 * DAY_MS), toMs);
+    const day = localDayOf('e.createdAt', spans);
+    and.push(literal(`EXISTS (SELECT 1 FROM blanket_events e WHERE e.blanketId = \`Blanket\`.\`id\` AND ${arrivalIn(q.reached, 'e')} AND ${day} >= ${from} AND ${day} < ${to})`));
   }
   if (and.length) (where as Record<symbol, unknown>)[Op.and] = and;
   if (q.q) {

@@ -1,3 +1,4 @@
+import { DateTime } from 'luxon';
 import { GLANCE_STEPS, STEP_STATUSES, arrivalMoves, type GlanceStep } from '@shared/drive/glance';
 
 /*
@@ -37,9 +38,71 @@ export function stepCase(statusColumn: string): string {
 }
 
 /**
- * The UTC day of a stored timestamp, and the Monday that starts its week. Sequelize keeps times in
- * UTC as text beginning YYYY-MM-DD, so the day is its first ten characters: cheaper than parsing
- * each one with date(), which a count over the whole history would pay for every row.
+ * The UTC day of a stored timestamp. Sequelize keeps times in UTC as text beginning YYYY-MM-DD, so the
+ * day is its first ten characters: cheaper than parsing each one with date(), which a count over the
+ * whole history would pay for every row.
  */
 export const dayOf = (column: string) => `substr(${column}, 1, 10)`;
-export const weekOfSql = (column: string) => `date(${dayOf(column)}, '-6 days', 'weekday 1')`;
+
+/** A stretch of time over which the drive's zone keeps one offset from UTC. */
+export interface ZoneSpan {
+  /** Where the next stretch begins, as stored text ("2026-10-25 01:00:00"); null for the last. */
+  untilUtc: string | null;
+  offsetMinutes: number;
+}
+
+const MINUTE_MS = 60_000;
+const STEP_MS = 7 * 86_400_000;
+const stored = (ms: number) => new Date(ms).toISOString().slice(0, 19).replace('T', ' ');
+
+/**
+ * The zone's offsets from UTC between two instants, split where they change (a clock change). Steps a
+ * week at a time, then finds the changing minute by halving: zones change at most a few times a
+ * year, never twice within a week, and each offset asked of luxon costs tens of microseconds.
+ */
+export function zoneSpans(zone: string, fromMs: number, toMs: number): ZoneSpan[] {
+  const offsetAt = (ms: number) => DateTime.fromMillis(ms, { zone }).offset;
+  const start = Math.floor(fromMs / MINUTE_MS) * MINUTE_MS;
+  const spans: ZoneSpan[] = [];
+  let offset = offsetAt(start);
+  for (let at = start + STEP_MS; at - STEP_MS < toMs; at += STEP_MS) {
+    if (offsetAt(at) === offset) continue;
+    let lo = at - STEP_MS; // still the old offset
+    let hi = at; // already the new one
+    while (hi - lo > MINUTE_MS) {
+      const mid = lo + Math.floor((hi - lo) / 2 / MINUTE_MS) * MINUTE_MS;
+      if (offsetAt(mid) === offset) lo = mid;
+      else hi = mid;
+    }
+    spans.push({ untilUtc: stored(hi), offsetMinutes: offset });
+    offset = offsetAt(hi);
+  }
+  spans.push({ untilUtc: null, offsetMinutes: offset });
+  return spans;
+}
+
+const hhmm = (minutes: number) => `${String(Math.floor(minutes / 60)).padStart(2, '0')}:${String(minutes % 60).padStart(2, '0')}`;
+
+/** The local day at one fixed offset: the UTC day, moved a day on or back only near UTC midnight. */
+function dayAtOffset(column: string, offsetMinutes: number): string {
+  const utcDay = dayOf(column);
+  const time = `substr(${column}, 12, 5)`;
+  if (offsetMinutes > 0) return `CASE WHEN ${time} >= '${hhmm(1440 - offsetMinutes)}' THEN date(${utcDay}, '+1 day') ELSE ${utcDay} END`;
+  if (offsetMinutes < 0) return `CASE WHEN ${time} < '${hhmm(-offsetMinutes)}' THEN date(${utcDay}, '-1 day') ELSE ${utcDay} END`;
+  return utcDay;
+}
+
+/**
+ * The drive's local day of a stored UTC timestamp (decision 0015: days are the drive's), as SQL. A
+ * comparison of the time's first five characters per row, and date() only for the rows near UTC
+ * midnight that move to the day before or after; the spans come from zoneSpans for the range asked.
+ * Times before the first span's range are read at its offset.
+ */
+export function localDayOf(column: string, spans: ZoneSpan[]): string {
+  if (spans.length === 1) return dayAtOffset(column, spans[0]!.offsetMinutes);
+  const arms = spans.map((s) => (s.untilUtc === null ? `ELSE ${dayAtOffset(column, s.offsetMinutes)}` : `WHEN ${column} < '${s.untilUtc}' THEN ${dayAtOffset(column, s.offsetMinutes)}`));
+  return `CASE ${arms.join(' ')} END`;
+}
+
+/** The Monday that starts the drive-local week of a stored timestamp. */
+export const weekOfSql = (column: string, spans: ZoneSpan[]) => `date(${localDayOf(column, spans)}, '-6 days', 'weekday 1')`;

@@ -4,10 +4,10 @@ import { Recipient } from '../../db/models/recipient';
 import { STEP_STATUSES, riskOf, weekAfter, weekOf, type GlanceStep } from '@shared/drive/glance';
 import type { DriveGlance, GlanceNeed, GlanceWeek, StepCounts } from '@shared/schemas/glance';
 import { needCounts, PROMISING_PLEDGE_STATUSES } from '../pledges/need-counts';
-import { driveNow } from '../bookings/drive-clock';
+import { driveNow, type DriveNow } from '../bookings/drive-clock';
 import { listRuns } from '../runs/runs.service';
 import { listExports } from '../runs/manifest.service';
-import { arrivalJoin, needOfBlanket, sqlList, stepCase, weekOfSql } from './glance-sql';
+import { arrivalJoin, needOfBlanket, sqlList, stepCase, weekOfSql, zoneSpans } from './glance-sql';
 
 const emptySteps = (): StepCounts => ({ finished: 0, received: 0, checked: 0, assigned: 0, packed: 0, delivered: 0 });
 
@@ -35,7 +35,7 @@ function storedDate(v: string | Date): Date {
  */
 export async function driveGlance(): Promise<DriveGlance> {
   const sequelize = Need.sequelize!;
-  // Open needs and runs go by the drive's own day; the history's weeks are counted in UTC.
+  // Open needs, runs and the history's weeks all go by the drive's own day (decision 0015).
   const clock = await driveNow();
   const today = clock.today;
   const now = new Date(clock.nowMs);
@@ -97,7 +97,7 @@ export async function driveGlance(): Promise<DriveGlance> {
       declined: statusCount('declined'),
     },
     needs: glanceNeeds,
-    weeks: await timeline(now.toISOString().slice(0, 10)),
+    weeks: await timeline(clock),
     waiting: await waitingLongest(now),
     upcomingRuns: await listRuns({ when: 'upcoming', page: 1, pageSize: 5 }).then((p) => ({ items: p.items, total: p.total })),
     recentExports: await listExports({ page: 1, pageSize: 5 }).then((p) => ({ items: p.items, total: p.total })),
@@ -109,28 +109,31 @@ export async function driveGlance(): Promise<DriveGlance> {
  * step. For one need: its pledges, and the blankets that count for it now (assigned to it, or else
  * pledged for it), through their whole history.
  */
-async function timeline(todayUtc: string, needId?: number): Promise<GlanceWeek[]> {
+async function timeline(clock: DriveNow, needId?: number): Promise<GlanceWeek[]> {
   const sequelize = Need.sequelize!;
+  const last = weekOf(clock.today);
+  // At most MAX_WEEKS: a long drive shows its latest year.
+  const earliest = new Date(Date.parse(`${last}T00:00:00Z`) - (MAX_WEEKS - 1) * 7 * DAY_MS).toISOString().slice(0, 10);
+  // The zone's offsets over the weeks shown (a day either side for the zone's own offset); weeks
+  // further back are not shown, so their rows may be read at the first span's offset.
+  const spans = zoneSpans(clock.zone, Date.parse(`${earliest}T00:00:00Z`) - 2 * DAY_MS, clock.nowMs + 2 * DAY_MS);
   const forNeed = needId === undefined ? '' : `AND e.blanketId IN (SELECT b.id FROM blankets b WHERE ${needOfBlanket('b.id', 'b.pledgeId')} = :needId)`;
   const reached = await sequelize.query<{ week: string; step: GlanceStep; n: number }>(
-    `SELECT ${weekOfSql('e.createdAt')} AS week, m.step AS step, COUNT(DISTINCT e.blanketId) AS n
+    `SELECT ${weekOfSql('e.createdAt', spans)} AS week, m.step AS step, COUNT(DISTINCT e.blanketId) AS n
      FROM blanket_events e ${arrivalJoin('e')}
      WHERE 1 = 1 ${forNeed}
      GROUP BY week, m.step`,
     { type: QueryTypes.SELECT, replacements: { needId: needId ?? null } },
   );
   const pledged = await sequelize.query<{ week: string; n: number }>(
-    `SELECT ${weekOfSql('createdAt')} AS week, SUM(quantity) AS n FROM pledges
+    `SELECT ${weekOfSql('createdAt', spans)} AS week, SUM(quantity) AS n FROM pledges
      WHERE status IN (${sqlList(PROMISING_PLEDGE_STATUSES)}) ${needId === undefined ? '' : 'AND needId = :needId'}
      GROUP BY week`,
     { type: QueryTypes.SELECT, replacements: { needId: needId ?? null } },
   );
-  const last = weekOf(todayUtc);
   const firsts = [...reached.map((r) => r.week), ...pledged.map((r) => r.week)].filter((w) => w <= last).sort();
   if (firsts.length === 0) return [];
   let first = firsts[0]!;
-  // At most MAX_WEEKS: a long drive shows its latest year.
-  const earliest = new Date(Date.parse(`${last}T00:00:00Z`) - (MAX_WEEKS - 1) * 7 * DAY_MS).toISOString().slice(0, 10);
   if (first < earliest) first = earliest;
   const weeks: GlanceWeek[] = [];
   for (let w = first; w <= last; w = weekAfter(w)) {
@@ -144,8 +147,7 @@ async function timeline(todayUtc: string, needId?: number): Promise<GlanceWeek[]
 
 /** GET /api/drive/glance/weeks: the week-by-week figures of one need. */
 export async function glanceWeeks(needId: number): Promise<GlanceWeek[]> {
-  const clock = await driveNow();
-  return timeline(new Date(clock.nowMs).toISOString().slice(0, 10), needId);
+  return timeline(await driveNow(), needId);
 }
 
 /**

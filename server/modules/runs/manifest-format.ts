@@ -89,6 +89,9 @@ export type ManifestSourceRow = [
 export interface ManifestDestination {
   recipient: string;
   address: string;
+  /** A run's date and the stop's place in it, for rows that leave them out (all rows of one stop). */
+  runDate?: string;
+  position?: number;
 }
 
 export type ManifestRecord = Array<string | number>;
@@ -129,8 +132,8 @@ export function manifestShaper(): (r: ManifestSourceRow, to: ManifestDestination
   return (r, to) => {
     const { widthCm, lengthCm } = sizeOnRecord({ widthCm: r[5], lengthCm: r[6], measuredWidthCm: r[7], measuredLengthCm: r[8] });
     return [
-      r[0] ?? '',
-      r[1] ?? '',
+      r[0] ?? to.runDate ?? '',
+      r[1] ?? to.position ?? '',
       to.recipient,
       to.address,
       r[2] ?? '',
