@@ -121,6 +121,8 @@ export function createApp(deps: AppDeps): KindloopApp {
   // The store only sweeps expired rows every quarter hour and a copied cookie can be replayed, so
   // the idle limit is enforced here too (OWASP Session Management: idle timeouts on the server).
   const idleMs = config.sessionIdleMinutes * 60_000;
+  /** The stamp each session was last renewed from in this process, and when. */
+  const renewing = new Map<string, { from: number | undefined; at: number }>();
   app.use('/api', (req, _res, next) => {
     const now = Date.now();
     const last = req.session.lastSeen;
@@ -132,7 +134,16 @@ export function createApp(deps: AppDeps): KindloopApp {
     // does not cost a write, and the idle limit and the stored expiry lag by under a minute.
     const held = req.session as typeof req.session & { passport?: { user?: number } };
     const holds = held.passport?.user !== undefined || held.csrfToken;
-    if (holds && (last === undefined || now - last >= TOUCH_EVERY_MS)) req.session.lastSeen = now;
+    // Requests that arrive together read the same stale stamp; only the first renews it, or each
+    // would save the same row at once (under 50 connections those saves queued for seconds). Should
+    // that save fail, a request a few seconds later tries again.
+    const renewal = renewing.get(req.sessionID);
+    const beingRenewed = renewal !== undefined && renewal.from === last && now - renewal.at < 5_000;
+    if (holds && (last === undefined || now - last >= TOUCH_EVERY_MS) && !beingRenewed) {
+      if (renewing.size >= 10_000) renewing.clear();
+      renewing.set(req.sessionID, { from: last, at: now });
+      req.session.lastSeen = now;
+    }
     next();
   });
   app.use('/api', passport.initialize());

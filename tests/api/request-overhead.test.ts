@@ -115,6 +115,21 @@ describe('the cost of one signed-in read', () => {
     expect(sessionWrites(await statementsOf(c, '/api/auth/me'))).toEqual([]);
   });
 
+  it('renews a stale stamp once when twenty requests arrive with it together', async () => {
+    const c = await signedIn(t.app, 'hattie@example.org');
+    await c.get('/api/auth/me');
+    const row = await sessionOf('hattie@example.org');
+    const data = JSON.parse(row.data!);
+    data.lastSeen = Date.now() - TOUCH_EVERY_MS - 1_000;
+    await row.update({ data: JSON.stringify(data) });
+    await settle();
+    seen.length = 0;
+    const answers = await Promise.all(Array.from({ length: 20 }, () => c.get('/api/auth/me')));
+    await settle();
+    expect(answers.map((r) => r.status)).toEqual(Array(20).fill(200));
+    expect(sessionWrites([...seen])).toHaveLength(1);
+  });
+
   it('still refuses a user made inactive since signing in', async () => {
     const c = await signedIn(t.app, 'priya@example.org');
     expect((await c.get('/api/auth/me')).status).toBe(200);
