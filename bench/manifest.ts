@@ -84,7 +84,15 @@ if (!MEMORY) {
       replacements: { now },
     });
     await sequelize.query(
-      `INSERT INTO blanket_events (blanketId, actorId, kind, fromStatus, toStatus, createdAt) SELECT id, 2, 'inspection', 'received', 'checked', :now FROM blankets`,
+      // Each blanket's history as a packed blanket has it: logged, received, checked, assigned, packed.
+      `INSERT INTO blanket_events (blanketId, actorId, kind, fromStatus, toStatus, createdAt)
+       SELECT b.id, s.actorId, s.kind, s.fromStatus, s.toStatus, :now FROM blankets b
+       CROSS JOIN (SELECT 1 AS actorId, 'logged' AS kind, NULL AS fromStatus, 'finished' AS toStatus, 1 AS k
+                   UNION ALL SELECT 2, 'intake', 'finished', 'received', 2
+                   UNION ALL SELECT 2, 'inspection', 'received', 'checked', 3
+                   UNION ALL SELECT 2, 'assignment', 'checked', 'assigned', 4
+                   UNION ALL SELECT 2, 'packing', 'assigned', 'packed', 5) s
+       ORDER BY b.id, s.k`,
       { ...opts, replacements: { now } },
     );
   });

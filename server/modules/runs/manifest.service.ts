@@ -59,11 +59,15 @@ const fieldSql = (runDate: string, position: string, checkedOn: string): Record<
   checkedOn,
 });
 
-/** The latest "checked" step of the blanket's history: who passed it and when. */
+/**
+ * The latest "checked" step of the blanket's history: who passed it and when. Ordered by time on the
+ * (blanketId, toStatus, createdAt) index, the lookup never leaves the index; asked as MAX(id), SQLite
+ * took the blanketId index and read every history entry of the blanket to test its status.
+ */
 const CHECKED_JOIN = `
   JOIN users maker ON maker.id = b.userId
   LEFT JOIN blanket_events checkedEvent ON checkedEvent.id =
-    (SELECT MAX(e.id) FROM blanket_events e WHERE e.blanketId = b.id AND e.toStatus = 'checked')
+    (SELECT e.id FROM blanket_events e WHERE e.blanketId = b.id AND e.toStatus = 'checked' ORDER BY e.createdAt DESC, e.id DESC LIMIT 1)
   LEFT JOIN users checker ON checker.id = checkedEvent.actorId`;
 
 type SourceField = (typeof MANIFEST_SOURCE_FIELDS)[number];
