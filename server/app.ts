@@ -47,7 +47,17 @@ export function createApp(deps: AppDeps): KindloopApp {
     }),
   );
   // gzip for the API's JSON and the built client alike: lists and bundles shrink to about a third.
-  app.use(compression());
+  // The API's routes get it route by route (mountRoutes), so that kept answers, which carry their
+  // own gzip, skip it; a request passes through it at most once.
+  const gzip = compression();
+  const compressed = new WeakSet<express.Request>();
+  const compress: express.RequestHandler = (req, res, next) => {
+    if (compressed.has(req)) return next();
+    compressed.add(req);
+    gzip(req, res, next);
+  };
+  const isApi = (url: string) => url.length >= 4 && url.slice(0, 4).toLowerCase() === '/api' && (url.length === 4 || url[4] === '/' || url[4] === '?');
+  app.use((req, res, next) => (isApi(req.url) ? next() : compress(req, res, next)));
   app.use('/api', express.json({ limit: '200kb' }));
 
   const SequelizeStore = connectSessionSequelize(session.Store);
@@ -108,7 +118,10 @@ export function createApp(deps: AppDeps): KindloopApp {
       store,
       resave: false,
       saveUninitialized: false,
-      rolling: true,
+      // The cookie is sent again whenever the session is saved, which the stamp below does at least
+      // once a minute while it is used, so its expiry trails the server's idle limit by under a
+      // minute without re-signing a cookie on every answer.
+      rolling: false,
       // express-session ids are 24 random bytes (192 bits), above OWASP's 128-bit recommendation.
       cookie: {
         httpOnly: true,
@@ -151,7 +164,7 @@ export function createApp(deps: AppDeps): KindloopApp {
   app.use('/api', csrfProtection);
 
   const routes = allRoutes({ sequelize, config, passport });
-  app.use(mountRoutes(routes));
+  app.use(mountRoutes(routes, { compress }));
   app.use('/api', notFoundHandler);
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) {

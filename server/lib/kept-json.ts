@@ -27,6 +27,13 @@ interface Kept {
 /** What the compression middleware leaves alone as not worth compressing (its default threshold). */
 const GZIP_FROM_BYTES = 1024;
 
+const OWN_ENCODING = new WeakSet<RequestHandler>();
+
+/** Whether a handler gzips its own answers, so the route needs no compression middleware. */
+export function sendsOwnEncoding(handler: RequestHandler): boolean {
+  return OWN_ENCODING.has(handler);
+}
+
 /**
  * A read route's answer, kept serialised until anything is written to the database
  * (server/db/kept.ts), per reader (see `per`), URL and drive day. The body and its ETag are made
@@ -34,7 +41,7 @@ const GZIP_FROM_BYTES = 1024;
  * byte what `res.json` would send; a refusal (a 404, say) is thrown as before and never kept.
  */
 export function keptJson<T>(opts: KeptJsonOptions<T>, answer: (req: Request) => Promise<T>): RequestHandler {
-  return async (req, res) => {
+  const handler: RequestHandler = async (req, res) => {
     const who = opts.per === 'user' ? `user ${req.user!.id}` : `role ${req.user!.role}`;
     const key = `json ${req.originalUrl} ${who} ${await driveToday()}`;
     const kept = await keptUntilWrite<Kept>(
@@ -64,4 +71,6 @@ export function keptJson<T>(opts: KeptJsonOptions<T>, answer: (req: Request) => 
     }
     res.send(kept.body);
   };
+  OWN_ENCODING.add(handler);
+  return handler;
 }

@@ -138,3 +138,52 @@ describe('the cost of one signed-in read', () => {
     await User.update({ active: true }, { where: { email: 'priya@example.org' } });
   });
 });
+
+describe('what a signed-in read sends besides the answer', () => {
+  const sidCookie = (res: { headers: Record<string, unknown> }) =>
+    ([] as string[]).concat((res.headers['set-cookie'] as string[] | undefined) ?? []).find((c) => c.startsWith('kindloop.sid='));
+
+  it('sends the session cookie again when the stamp is renewed, not on every answer', async () => {
+    // A user with no other session in this file, so that the row changed below is this client's.
+    const c = await signedIn(t.app, 'felix@example.org');
+    await c.get('/api/auth/me');
+    const quiet = await c.get('/api/auth/me');
+    expect(quiet.status).toBe(200);
+    expect(sidCookie(quiet)).toBeUndefined();
+
+    const row = await sessionOf('felix@example.org');
+    const data = JSON.parse(row.data!);
+    data.lastSeen = Date.now() - TOUCH_EVERY_MS - 1_000;
+    await row.update({ data: JSON.stringify(data) });
+    const renewed = await c.get('/api/auth/me');
+    expect(renewed.status).toBe(200);
+    const cookie = sidCookie(renewed);
+    expect(cookie).toMatch(/HttpOnly/i);
+    const expires = Date.parse(/Expires=([^;]+)/i.exec(cookie ?? '')?.[1] ?? '');
+    // The cookie's expiry moves on with the renewal, a full idle limit from now.
+    expect(expires).toBeGreaterThan(Date.now() + t.config.sessionIdleMinutes * 60_000 - 5_000);
+  });
+
+  it('gzips a large answer of a route that keeps none of its own, once', async () => {
+    const c = await signedIn(t.app, 'coordinator');
+    const plain = await c.get('/api/users').set('Accept-Encoding', 'identity');
+    expect(plain.status).toBe(200);
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(JSON.stringify(plain.body).length).toBeGreaterThan(1024);
+    const zipped = await c.get('/api/users').set('Accept-Encoding', 'gzip');
+    expect(zipped.headers['content-encoding']).toBe('gzip');
+    expect(zipped.body).toEqual(plain.body);
+  });
+
+  it('finds a route by its area in any letter case, and refuses an unknown area with JSON', async () => {
+    const c = await signedIn(t.app, 'volunteer');
+    expect((await c.get('/API/Auth/me')).status).toBe(200);
+    const unknown = await c.get('/api/no-such-area');
+    expect(unknown.status).toBe(404);
+    expect(unknown.headers['content-type']).toMatch(/json/);
+    // Security headers come with every answer, kept or not.
+    const kept = await c.get('/api/needs');
+    expect(kept.headers['content-security-policy']).toBeTruthy();
+    expect(kept.headers['x-content-type-options']).toBe('nosniff');
+  });
+});
