@@ -7,6 +7,7 @@ import { Recipient } from '../../server/db/models/recipient';
 import { Site } from '../../server/db/models/site';
 import { User } from '../../server/db/models/user';
 import { BlanketEvent } from '../../server/db/models/blanket-event';
+import { Drive } from '../../server/db/models/drive';
 import { MANIFEST_COLUMNS } from '../../server/modules/runs/manifest-format';
 import type { ExportView, RunView } from '@shared/schemas/run';
 import type { Page } from '@shared/schemas/page';
@@ -66,7 +67,7 @@ describe('GET /api/runs/:id/manifest.csv', () => {
     const text = (res.body as Buffer).toString('utf8');
     expect(text.charCodeAt(0)).not.toBe(0xfeff);
     expect(text.endsWith('\r\n')).toBe(true);
-    const rows = parse(text) as string[][];
+    const rows = parse(text, { record_delimiter: ['\r\n', '\n', '\r'] }) as string[][];
     expect(rows[0]).toEqual([...MANIFEST_COLUMNS]);
     expect(rows).toHaveLength(run.blanketCount + 1);
     const col = (name: (typeof MANIFEST_COLUMNS)[number]) => MANIFEST_COLUMNS.indexOf(name);
@@ -83,6 +84,21 @@ describe('GET /api/runs/:id/manifest.csv', () => {
     expect([checked[col('Checked by')], checked[col('Checked on')]]).toEqual([latestChecker, '2026-11-30']);
     const unchecked = rows.find((r) => r[col('Colours')] === 'cream and moss')!;
     expect([unchecked[col('Checked by')], unchecked[col('Checked on')]]).toEqual(['', '']);
+  });
+
+  it("gives the check's day in the drive's zone, not in UTC (decision 0015)", async () => {
+    const drive = (await Drive.findOne({ order: [['id', 'ASC']] }))!;
+    const zone = drive.timeZone;
+    // 10:15 UTC on 30 November is a quarter past midnight on 1 December fourteen hours east of UTC.
+    await drive.update({ timeZone: 'Etc/GMT-14' });
+    try {
+      const text = ((await raw(coordinator, `/api/runs/${run.id}/manifest.csv`)).body as Buffer).toString('utf8');
+      const rows = parse(text) as string[][];
+      const checked = rows.find((r) => r[MANIFEST_COLUMNS.indexOf('Colours')]!.includes('HYPERLINK'))!;
+      expect(checked[MANIFEST_COLUMNS.indexOf('Checked on')]).toBe('2026-12-01');
+    } finally {
+      await drive.update({ timeZone: zone });
+    }
   });
 
   it('makes formula cells inert (OWASP CSV Injection) and keeps plain text as it is', async () => {

@@ -22,6 +22,9 @@ async function write(records: ManifestRecord[], bom = false): Promise<string> {
   return Buffer.concat(chunks).toString('utf8');
 }
 
+/** The text with every quoted field taken out: what is left may hold CR and LF only as CRLF record ends. */
+const outsideQuotes = (text: string) => text.replace(/"(?:[^"]|"")*"/g, '');
+
 const record = (over: Partial<Record<number, string | number>> = {}): ManifestRecord =>
   MANIFEST_COLUMNS.map((_, i) => over[i] ?? `v${i}`);
 
@@ -40,11 +43,23 @@ describe('RFC 4180', () => {
     expect(text).toContain('"Line one\r\nLine two"');
   });
 
+  it('quotes a lone LF or CR too: unquoted text holds neither (RFC 4180 §2, TEXTDATA)', async () => {
+    const text = await write([record({ 3: '4 Quay Row\nThimbleford', 16: 'soft\rwarm' })]);
+    expect(text).toContain('"4 Quay Row\nThimbleford"');
+    expect(text).toContain('"soft\rwarm"');
+    expect(outsideQuotes(text).replace(/\r\n/g, '')).not.toMatch(/[\r\n]/);
+    // A reader that ends a row at any line break, as spreadsheet programs do, still finds one record.
+    const back = parse(text, { record_delimiter: ['\r\n', '\n', '\r'] }) as string[][];
+    expect(back).toHaveLength(2);
+    expect(back[1]![3]).toBe('4 Quay Row\nThimbleford');
+  });
+
   it('round-trips any text through csv-parse unchanged, except neutralised formula cells', async () => {
     const cell = fc.string({ unit: 'binary', maxLength: 30 });
     await fc.assert(
       fc.asyncProperty(fc.array(fc.array(cell, { minLength: MANIFEST_COLUMNS.length, maxLength: MANIFEST_COLUMNS.length }), { maxLength: 5 }), async (rows) => {
         const text = await write(rows);
+        expect(outsideQuotes(text).replace(/\r\n/g, '')).not.toMatch(/[\r\n]/);
         const back = parse(text, { columns: false, relax_column_count: false, record_delimiter: '\r\n' }) as string[][];
         expect(back[0]).toEqual([...MANIFEST_COLUMNS]);
         expect(back).toHaveLength(rows.length + 1);

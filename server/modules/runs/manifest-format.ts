@@ -178,7 +178,7 @@ export function neutralise(cell: string): string {
 
 /**
  * csv-stringify set up for RFC 4180: CRLF after every record, one header row, fields quoted where
- * they hold a comma, a quote or a line break (quotes doubled), plus every neutralised cell.
+ * they hold a comma, a quote, a CR or an LF (quotes doubled), plus every neutralised cell.
  */
 export function manifestStringifier(opts: { bom: boolean }): Stringifier {
   const options: Options = {
@@ -186,6 +186,10 @@ export function manifestStringifier(opts: { bom: boolean }): Stringifier {
     // Records are arrays in column order; the names only head the file.
     columns: [...MANIFEST_COLUMNS],
     record_delimiter: 'windows',
+    // A lone CR or LF (an address typed on two lines) is quoted too: RFC 4180's unquoted text holds
+    // neither, and a spreadsheet program would start a new row there. csv-stringify quotes only the
+    // configured delimiter (CRLF) unless asked.
+    quote_record_delimiter: true,
     bom: opts.bom,
     quoted_match: /^'[=+\-@\t\r\n\0]/,
     cast: { string: (v) => neutralise(v) },

@@ -15,7 +15,9 @@ import type { Page } from '@shared/schemas/page';
 import type { ExportView } from '@shared/schemas/run';
 import { MANIFEST_SOURCE_FIELDS, manifestShaper, manifestStringifier, type ManifestRecord, type ManifestSourceRow } from './manifest-format';
 import { preparedRead } from '../../db/prepared-read';
-import { driveToday } from '../bookings/drive-clock';
+import { driveToday, driveZone } from '../bookings/drive-clock';
+import { localDayOf, zoneSpans } from '../drive/glance-sql';
+import { nowMs } from '../../lib/clock';
 
 export type ManifestTarget = { kind: 'run'; id: number } | { kind: 'recipient'; id: number };
 
@@ -33,7 +35,7 @@ export const MANIFEST_PAGE = 1000;
  */
 const exactNumber = (column: string) => `CASE WHEN ${column} = CAST(${column} AS INTEGER) THEN CAST(${column} AS INTEGER) ELSE ${column} END`;
 
-const fieldSql = (runDate: string, position: string): Record<(typeof MANIFEST_SOURCE_FIELDS)[number], string> => ({
+const fieldSql = (runDate: string, position: string, checkedOn: string): Record<(typeof MANIFEST_SOURCE_FIELDS)[number], string> => ({
   runDate,
   position,
   box: 'rb.box',
@@ -54,8 +56,7 @@ const fieldSql = (runDate: string, position: string): Record<(typeof MANIFEST_SO
   labelName: 'b.labelName',
   makerName: 'maker.name',
   checkedBy: 'checker.name',
-  // Stored in UTC as text beginning YYYY-MM-DD (see drive/glance-sql.ts): its first ten characters.
-  checkedOn: 'substr(checkedEvent.createdAt, 1, 10)',
+  checkedOn,
 });
 
 /**
@@ -93,27 +94,50 @@ function pageQuery(inner: { fields: Record<SourceField, string>; from: string; w
 }
 
 /** A run's stop, rows keyed by (box, blanket) on the index that orders them. */
-const RUN_PAGE = pageQuery({
-  // The blanket's id from run_blankets, so the ORDER BY is the index's own order: named from
-  // blankets, SQLite sorted every page again in a temporary tree.
-  // The run's date and the stop's position are the same on every row: passed once, not per row.
-  fields: { ...fieldSql('NULL', 'NULL'), blanketId: 'rb.blanketId' },
-  from: `run_blankets rb JOIN blankets b ON b.id = rb.blanketId ${CHECKED_JOIN}`,
-  where: 'rb.stopId = ? AND (rb.box, rb.blanketId) > (?, ?)',
-  orderBy: ['box', 'blanketId'],
-});
+const runPage = (checkedOn: string) =>
+  pageQuery({
+    // The blanket's id from run_blankets, so the ORDER BY is the index's own order: named from
+    // blankets, SQLite sorted every page again in a temporary tree.
+    // The run's date and the stop's position are the same on every row: passed once, not per row.
+    fields: { ...fieldSql('NULL', 'NULL', checkedOn), blanketId: 'rb.blanketId' },
+    from: `run_blankets rb JOIN blankets b ON b.id = rb.blanketId ${CHECKED_JOIN}`,
+    where: 'rb.stopId = ? AND (rb.box, rb.blanketId) > (?, ?)',
+    orderBy: ['box', 'blanketId'],
+  });
 
 /** Everything given to one recipient (assigned, packed or delivered), with its run and box where it has one. */
-const RECIPIENT_PAGE = pageQuery({
-  fields: fieldSql('run.runDate', 's.position'),
-  from: `blankets b
+const recipientPage = (checkedOn: string) =>
+  pageQuery({
+    fields: fieldSql('run.runDate', 's.position', checkedOn),
+    from: `blankets b
     LEFT JOIN run_blankets rb ON rb.blanketId = b.id
     LEFT JOIN run_stops s ON s.id = rb.stopId
     LEFT JOIN runs run ON run.id = rb.runId
     ${CHECKED_JOIN}`,
-  where: `b.recipientId = ? AND b.status IN (${ASSIGNED_STATUSES.map((x) => `'${x}'`).join(', ')}) AND b.id > ?`,
-  orderBy: ['blanketId'],
-});
+    where: `b.recipientId = ? AND b.status IN (${ASSIGNED_STATUSES.map((x) => `'${x}'`).join(', ')}) AND b.id > ?`,
+    orderBy: ['blanketId'],
+  });
+
+const DAY_MS = 86_400_000;
+/** How far back the check days are read with the zone's own clock changes; older ones at its earliest offset. */
+const CHECKS_LOOK_BACK_DAYS = 400;
+const pageQueries = new Map<string, { run: PageQuery; recipient: PageQuery }>();
+
+/**
+ * The page queries for the drive's zone now: "Checked on" is the drive's local day of the check
+ * (decision 0015, days are the drive's), not the UTC day, which in a zone far from UTC is the day
+ * before or after for checks made in the local morning or evening. Built once per zone and span.
+ */
+async function pageQueriesNow(): Promise<{ run: PageQuery; recipient: PageQuery }> {
+  const now = nowMs();
+  const checkedOn = localDayOf('checkedEvent.createdAt', zoneSpans(await driveZone(), now - CHECKS_LOOK_BACK_DAYS * DAY_MS, now + 2 * DAY_MS));
+  let queries = pageQueries.get(checkedOn);
+  if (!queries) {
+    if (pageQueries.size > 16) pageQueries.clear();
+    pageQueries.set(checkedOn, (queries = { run: runPage(checkedOn), recipient: recipientPage(checkedOn) }));
+  }
+  return queries;
+}
 
 const BOX = MANIFEST_SOURCE_FIELDS.indexOf('box');
 const BLANKET_ID = MANIFEST_SOURCE_FIELDS.indexOf('blanketId');
@@ -172,11 +196,12 @@ async function* runPages(sequelize: Sequelize, runId: number, pageSize: number):
       WHERE s.runId = ? ORDER BY s.position ASC`,
     { replacements: [runId], type: QueryTypes.SELECT },
   );
+  const { run: query } = await pageQueriesNow();
   const shape = manifestShaper();
   for (const stop of stops) {
     const to = { recipient: stop.recipient, address: stop.address, runDate: stop.runDate, position: stop.position };
     const read = (after: ManifestSourceRow | null) =>
-      readPage(sequelize, RUN_PAGE, [stop.id, after?.[BOX] ?? 0, after?.[BLANKET_ID] ?? 0, pageSize]);
+      readPage(sequelize, query, [stop.id, after?.[BOX] ?? 0, after?.[BLANKET_ID] ?? 0, pageSize]);
     for await (const rows of keysetPages(read, pageSize)) yield rows.map((r) => shape(r, to));
   }
 }
@@ -187,9 +212,10 @@ async function* recipientPages(sequelize: Sequelize, recipientId: number, pageSi
     type: QueryTypes.SELECT,
   });
   if (!rc) return;
+  const { recipient: query } = await pageQueriesNow();
   const shape = manifestShaper();
   const to = { recipient: rc.name, address: rc.address };
-  const read = (after: ManifestSourceRow | null) => readPage(sequelize, RECIPIENT_PAGE, [recipientId, after?.[BLANKET_ID] ?? 0, pageSize]);
+  const read = (after: ManifestSourceRow | null) => readPage(sequelize, query, [recipientId, after?.[BLANKET_ID] ?? 0, pageSize]);
   for await (const rows of keysetPages(read, pageSize)) yield rows.map((r) => shape(r, to));
 }
 

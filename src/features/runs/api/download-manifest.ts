@@ -2,6 +2,7 @@ import { useCallback, useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '@/lib/api-client';
 import { runKeys } from './keys';
+import { CsvRecordCounter } from '../lib/csv-record-counter';
 
 export interface DownloadState {
   /** 0..1 while the manifest streams in, null when idle. */
@@ -11,7 +12,7 @@ export interface DownloadState {
 }
 
 /**
- * Fetches a manifest as a stream and counts its lines against the row count the server announces
+ * Fetches a manifest as a stream and counts its records against the row count the server announces
  * (X-Manifest-Rows), so a long export shows real progress; then hands the file to the browser.
  */
 export async function downloadManifest(url: string, onProgress: (fraction: number) => void): Promise<string> {
@@ -30,14 +31,14 @@ export async function downloadManifest(url: string, onProgress: (fraction: numbe
   const name = /filename="([^"]+)"/.exec(res.headers.get('Content-Disposition') ?? '')?.[1] ?? 'delivery-list.csv';
   const reader = res.body.getReader();
   const chunks: Uint8Array[] = [];
-  let lines = 0;
+  const counter = new CsvRecordCounter();
   for (;;) {
     const { done, value } = await reader.read();
     if (done) break;
     chunks.push(value);
-    for (const byte of value) if (byte === 10) lines += 1;
-    // One header line plus one line per blanket.
-    onProgress(rows > 0 ? Math.min(1, lines / (rows + 1)) : 0.5);
+    // One header record plus one record per blanket.
+    const records = counter.push(value);
+    onProgress(rows > 0 ? Math.min(1, records / (rows + 1)) : 0.5);
   }
   onProgress(1);
   const href = URL.createObjectURL(new Blob(chunks as BlobPart[], { type: 'text/csv' }));
