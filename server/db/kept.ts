@@ -44,7 +44,7 @@ export function writeKind(sql: string): 'read' | 'sessions' | 'data' {
 /** Whether a statement may change what a kept answer read. */
 export const mayWrite = (sql: string): boolean => writeKind(sql) === 'data';
 
-/** Kept answers are read again at least this often, whatever the generations say. */
+/** Kept answers are read again at least this often, whatever the generations say (behind the kept one: see keptUntilWrite). */
 export const KEPT_MAX_MS = 10_000;
 
 interface Entry {
@@ -90,18 +90,27 @@ export interface KeepOptions {
  * the same answer is being read, with nothing written since, share that read (under load they come
  * fifty at a time). The key must name everything the answer depends on besides the data: the
  * reader, the query, the day. `database` is the Sequelize instance the answer is read from.
+ *
+ * An answer older than KEPT_MAX_MS with nothing written since is still the truth (the generations
+ * say so, other processes' commits included): it is handed out while one fresh read runs behind it,
+ * so the waiting requests do not all stall on that read every few seconds under load.
  */
 export async function keptUntilWrite<T>(database: object, key: string, compute: () => Promise<T>, opts: KeepOptions = {}): Promise<T> {
   const store = storeOf(database);
-  const { entries, running } = store;
   const gen = generation;
   const wallNow = Date.now();
-  const hit = entries.get(key);
-  if (hit && hit.generation === gen && wallNow - hit.at < KEPT_MAX_MS && (hit.until === Infinity || (opts.now?.() ?? wallNow) < hit.until)) {
+  const hit = store.entries.get(key);
+  if (hit && hit.generation === gen && (hit.until === Infinity || (opts.now?.() ?? wallNow) < hit.until)) {
+    if (wallNow - hit.at >= KEPT_MAX_MS && !store.running.has(key)) readAndKeep(store, key, compute, opts, gen).catch(() => undefined);
     return hit.value as T;
   }
-  const shared = running.get(key);
+  const shared = store.running.get(key);
   if (shared && shared.generation === gen) return shared.promise as Promise<T>;
+  return readAndKeep(store, key, compute, opts, gen);
+}
+
+async function readAndKeep<T>(store: Store, key: string, compute: () => Promise<T>, opts: KeepOptions, gen: number): Promise<T> {
+  const { entries, running } = store;
   const promise = compute();
   running.set(key, { generation: gen, promise });
   try {

@@ -1,11 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import request from 'supertest';
 import sqlite3 from 'sqlite3';
 import { makeTestApp, signedIn, type Client, type TestApp } from './test-app';
 import { Need } from '../../server/db/models/need';
 import { Recipient } from '../../server/db/models/recipient';
-import { OTHER_WRITERS_EVERY_MS, keptUntilWrite, mayWrite, writeGeneration, writeKind } from '../../server/db/kept';
+import { KEPT_MAX_MS, OTHER_WRITERS_EVERY_MS, keptUntilWrite, mayWrite, writeGeneration, writeKind } from '../../server/db/kept';
 import { setClock } from '../../server/lib/clock';
 import type { OpenNeed } from '@shared/schemas/pledge';
 import type { RecipientView } from '@shared/schemas/recipient';
@@ -119,6 +119,34 @@ describe('an answer kept until a write', () => {
     expect(reads).toBe(2);
     expect(await read()).toBe(stale + 1);
     expect(reads).toBe(2);
+  });
+
+  it('hands out an old answer with nothing written since at once, reading a fresh one behind it', async () => {
+    let reads = 0;
+    let release: () => void = () => undefined;
+    const read = () =>
+      keptUntilWrite(t.sequelize, 'test-aged', async () => {
+        reads += 1;
+        if (reads === 2) await new Promise<void>((r) => (release = r));
+        return reads;
+      });
+    expect(await read()).toBe(1);
+    const realNow = Date.now;
+    const now = vi.spyOn(Date, 'now').mockImplementation(() => realNow() + KEPT_MAX_MS + 1);
+    try {
+      // Past the age limit: the kept answer comes back at once while the second read waits.
+      expect(await read()).toBe(1);
+      expect(await read()).toBe(1);
+      expect(reads).toBe(2);
+      release();
+      await vi.waitFor(async () => expect(await read()).toBe(2));
+      expect(reads).toBe(2);
+    } finally {
+      now.mockRestore();
+    }
+    // A write still drops it at once: the next caller waits for a fresh read.
+    await Need.update({ preferences: 'Any colours, aged' }, { where: { id: (await Need.findOne())!.id } });
+    expect(await read()).toBe(3);
   });
 });
 
