@@ -10,21 +10,15 @@
  * req/s, p50, p99 and bytes with the ratio to the baseline, the server's start time and its largest
  * RSS during the run, and writes them into bench/README.md between the api-bench markers.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
+import type { ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
-import http from 'node:http';
 import os from 'node:os';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
-import { BENCH_PASSWORD, growDemo } from './grow-demo';
-import { SERVER_ENTRY, buildServerIfChanged } from '../scripts/build-if-changed';
+import { growDemo } from './grow-demo';
+import { buildServerIfChanged } from '../scripts/build-if-changed';
+import { arg, benchRoutes, raw, root, startBare, startKindloop, stop, waitFor } from './api-harness';
 
-const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
-const arg = (name: string, fallback: string) => {
-  const i = process.argv.indexOf(`--${name}`);
-  return i >= 0 && process.argv[i + 1] ? process.argv[i + 1]! : fallback;
-};
 const DB = path.resolve(root, arg('db', 'bench/data/demo-20k.sqlite'));
 const DURATION = Number(arg('duration', '10'));
 const CONNECTIONS = Number(arg('connections', '50'));
@@ -33,53 +27,6 @@ const ONLY = arg('only', '');
 const PORT = 3411;
 const MAIL_PORT = 3412;
 const BARE_PORT = 3413;
-
-interface Raw {
-  status: number;
-  headers: http.IncomingHttpHeaders;
-  body: Buffer;
-}
-
-function raw(port: number, url: string, opts: { method?: string; headers?: Record<string, string>; body?: string } = {}): Promise<Raw> {
-  return new Promise((resolve, reject) => {
-    const req = http.request({ host: '127.0.0.1', port, path: url, method: opts.method ?? 'GET', headers: opts.headers }, (res) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
-    });
-    req.on('error', reject);
-    if (opts.body) req.write(opts.body);
-    req.end();
-  });
-}
-
-async function waitFor(port: number, url: string, ms: number) {
-  const until = Date.now() + ms;
-  for (;;) {
-    try {
-      if ((await raw(port, url)).status === 200) return;
-    } catch {
-      /* not listening yet */
-    }
-    if (Date.now() > until) throw new Error(`Nothing answered on :${port}${url} within ${ms} ms`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-}
-
-const cookieOf = (r: Raw) => (r.headers['set-cookie'] ?? []).map((c) => c.split(';')[0]).join('; ');
-
-async function signIn(email: string): Promise<string> {
-  const csrf = await raw(PORT, '/api/auth/csrf');
-  const cookie = cookieOf(csrf);
-  const token = (JSON.parse(csrf.body.toString()) as { csrfToken: string }).csrfToken;
-  const login = await raw(PORT, '/api/auth/login', {
-    method: 'POST',
-    headers: { cookie, 'x-csrf-token': token, 'content-type': 'application/json' },
-    body: JSON.stringify({ email, password: BENCH_PASSWORD }),
-  });
-  if (login.status !== 200) throw new Error(`Sign-in as ${email} failed: ${login.status} ${login.body.toString()}`);
-  return cookieOf(login);
-}
 
 function rssOf(pid: number): number {
   try {
@@ -97,10 +44,6 @@ async function load(url: string, headers: Record<string, string>) {
     .map(([code, s]) => `${s.count} × ${code}`);
   const kinds = [...codes, r.errors ? `${r.errors} errors` : '', r.timeouts ? `${r.timeouts} timeouts` : ''].filter(Boolean).join(', ');
   return { rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.timeouts + r.non2xx, kinds };
-}
-
-function stop(child: ChildProcess | undefined) {
-  if (child?.pid && child.exitCode === null) child.kill('SIGTERM');
 }
 
 async function main() {
@@ -126,45 +69,13 @@ async function main() {
   try {
     buildServerIfChanged();
     const started = Date.now();
-    server = spawn(process.execPath, [SERVER_ENTRY], {
-      cwd: root,
-      stdio: ['ignore', 'ignore', 'inherit'],
-      env: {
-        ...process.env,
-        NODE_ENV: 'production',
-        PORT: String(PORT),
-        HOST: '127.0.0.1',
-        DATABASE_PATH: dbCopy,
-        UPLOAD_DIR: path.join(dir, 'uploads'),
-        EXPORT_DIR: path.join(dir, 'exports'),
-        MAIL_CATCHER_PORT: String(MAIL_PORT),
-        SEED_DEMO: 'false',
-        // Plain HTTP on loopback: a Secure cookie would never be set.
-        COOKIE_SECURE: 'false',
-        SERVE_CLIENT: 'false',
-        SCRYPT_LOG_N: '12',
-        LOGIN_MAX_FAILURES: '1000',
-      },
-    });
+    server = startKindloop({ port: PORT, mailPort: MAIL_PORT, dbCopy, dir });
     await waitFor(PORT, '/api/health', 60_000);
     const startSeconds = (Date.now() - started) / 1000;
     let maxRss = rssOf(server.pid!);
     const sampler = setInterval(() => (maxRss = Math.max(maxRss, rssOf(server!.pid!))), 200);
 
-    const volunteer = await signIn('volunteer@example.org');
-    const organiser = await signIn('organiser@example.org');
-    const sites = JSON.parse((await raw(PORT, '/api/sites', { headers: { cookie: organiser } })).body.toString()) as { sites: Array<{ id: number }> };
-    const today = new Date();
-    const day = `${today.getFullYear()}-${String(today.getMonth() + 1).padStart(2, '0')}-${String(today.getDate()).padStart(2, '0')}`;
-    const routes = [
-      { name: 'GET /api/blankets (volunteer)', url: '/api/blankets', cookie: volunteer },
-      { name: 'GET /api/needs (volunteer)', url: '/api/needs', cookie: volunteer },
-      { name: 'GET /api/recipients (volunteer)', url: '/api/recipients', cookie: volunteer },
-      { name: 'GET /api/intake/queue (organiser)', url: `/api/intake/queue?siteId=${sites.sites[0]!.id}&date=${day}`, cookie: organiser },
-      { name: 'GET /api/blankets (organiser, page 1)', url: '/api/blankets', cookie: organiser },
-      { name: 'GET /api/pledges (organiser, page 1)', url: '/api/pledges', cookie: organiser },
-      { name: 'GET /api/drive/progress (organiser)', url: '/api/drive/progress', cookie: organiser },
-    ].filter((r) => !ONLY || r.url.includes(ONLY));
+    const routes = await benchRoutes(PORT, ONLY);
     const bodies: Buffer[] = [];
     const gzipBytes: number[] = [];
     for (const r of routes) {
@@ -173,14 +84,7 @@ async function main() {
       bodies.push(plain.body);
       gzipBytes.push((await raw(PORT, r.url, { headers: { cookie: r.cookie, 'accept-encoding': 'gzip' } })).body.length);
     }
-    const bodiesFile = path.join(dir, 'bodies.json');
-    fs.writeFileSync(bodiesFile, JSON.stringify(bodies.map((b) => b.toString('base64'))));
-    bare = spawn(process.execPath, ['--import', 'tsx', 'bench/bare-server.ts'], {
-      cwd: root,
-      stdio: ['ignore', 'ignore', 'inherit'],
-      env: { ...process.env, NODE_ENV: 'production', BARE_PORT: String(BARE_PORT), BARE_BODIES: bodiesFile },
-    });
-    await waitFor(BARE_PORT, '/r/0', 30_000);
+    bare = await startBare(BARE_PORT, dir, bodies);
 
     // Both servers answer each route for two seconds first, unmeasured, so the first route in the
     // table does not carry the JIT's warm-up for the rest.
