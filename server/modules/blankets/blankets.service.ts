@@ -2,7 +2,7 @@ import { Op, col, fn, literal, where as sqlWhere, type Order, type Transaction, 
 import { Blanket } from '../../db/models/blanket';
 import { BlanketEvent } from '../../db/models/blanket-event';
 import { STEP_STATUSES } from '@shared/drive/glance';
-import { arrivalIn, localDayOf, needOfBlanket, zoneSpans } from '../drive/glance-sql';
+import { DAY_MS, arrivalIn, localDayOf, needOfBlanket, zoneSpans } from '../drive/glance-sql';
 import { driveZone } from '../bookings/drive-clock';
 import { Photo } from '../../db/models/photo';
 import { Pledge } from '../../db/models/pledge';
@@ -38,8 +38,6 @@ import { uniqueBlanketCode } from './blanket-code';
 import type { Page } from '@shared/schemas/page';
 
 /** BlanketEvent.data is free-form JSON; the model's creation type can't say so. */
-/** A day in milliseconds, for the span of clock changes a date filter needs. */
-const DAY_MS = 86_400_000;
 const eventData = (v: unknown) => v as BlanketEvent['data'];
 
 type Loaded = Blanket & {

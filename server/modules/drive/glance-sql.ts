@@ -52,7 +52,9 @@ export interface ZoneSpan {
 }
 
 const MINUTE_MS = 60_000;
-const STEP_MS = 7 * 86_400_000;
+/** A day in milliseconds, for the ranges of instants whose clock changes a query needs. */
+export const DAY_MS = 86_400_000;
+const STEP_MS = 7 * DAY_MS;
 const stored = (ms: number) => new Date(ms).toISOString().slice(0, 19).replace('T', ' ');
 
 /**

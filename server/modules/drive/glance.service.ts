@@ -7,7 +7,7 @@ import { needCounts, PROMISING_PLEDGE_STATUSES } from '../pledges/need-counts';
 import { driveNow, type DriveNow } from '../bookings/drive-clock';
 import { listRuns } from '../runs/runs.service';
 import { listExports } from '../runs/manifest.service';
-import { arrivalJoin, needOfBlanket, sqlList, stepCase, weekOfSql, zoneSpans } from './glance-sql';
+import { DAY_MS, arrivalJoin, needOfBlanket, sqlList, stepCase, weekOfSql, zoneSpans } from './glance-sql';
 
 const emptySteps = (): StepCounts => ({ finished: 0, received: 0, checked: 0, assigned: 0, packed: 0, delivered: 0 });
 
@@ -17,8 +17,6 @@ export const MAX_WEEKS = 52;
 export const LONGEST = 3;
 /** The steps a blanket can wait at; delivered is the end of the line. */
 const WAITING_STEPS: GlanceStep[] = ['finished', 'received', 'checked', 'assigned', 'packed'];
-
-const DAY_MS = 86_400_000;
 
 /** A timestamp as SQLite hands it back from a raw query ("2026-11-30 09:15:00.000 +00:00"). */
 function storedDate(v: string | Date): Date {

@@ -16,7 +16,7 @@ import type { ExportView } from '@shared/schemas/run';
 import { MANIFEST_SOURCE_FIELDS, manifestShaper, manifestStringifier, type ManifestRecord, type ManifestSourceRow } from './manifest-format';
 import { preparedRead } from '../../db/prepared-read';
 import { driveToday, driveZone } from '../bookings/drive-clock';
-import { localDayOf, zoneSpans } from '../drive/glance-sql';
+import { DAY_MS, localDayOf, zoneSpans } from '../drive/glance-sql';
 import { nowMs } from '../../lib/clock';
 
 export type ManifestTarget = { kind: 'run'; id: number } | { kind: 'recipient'; id: number };
@@ -118,7 +118,6 @@ const recipientPage = (checkedOn: string) =>
     orderBy: ['blanketId'],
   });
 
-const DAY_MS = 86_400_000;
 /** How far back the check days are read with the zone's own clock changes; older ones at its earliest offset. */
 const CHECKS_LOOK_BACK_DAYS = 400;
 const pageQueries = new Map<string, { run: PageQuery; recipient: PageQuery }>();
