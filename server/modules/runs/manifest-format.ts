@@ -35,7 +35,7 @@ export const MANIFEST_COLUMNS = [
  * service builds its SQL from the same list). An array parsed from one JSON text per page costs far
  * less than an object per row from the driver: most of a large manifest's time went into making and
  * copying those objects. SQLite gives JSON columns as text, booleans as 0/1 and the check's day
- * ready cut from its UTC timestamp.
+ * ready made: the drive's local day of its UTC timestamp.
  */
 export const MANIFEST_SOURCE_FIELDS = [
   'runDate',

@@ -25,16 +25,16 @@ export type ManifestTarget = { kind: 'run'; id: number } | { kind: 'recipient'; 
 export const MANIFEST_PAGE = 1000;
 
 /**
- * Each field of a page row (manifest-format's MANIFEST_SOURCE_FIELDS) as SQL over the page query's
- * tables. A run's rows leave out the run's date and the stop's position (read once per stop and
- * given to the shaper); a recipient's rows take them from each blanket's own run.
- */
-/**
  * A REAL column that holds a whole number is handed over as an INTEGER: the same value once parsed,
  * and SQLite writes an integer into JSON several times faster than a floating-point number.
  */
 const exactNumber = (column: string) => `CASE WHEN ${column} = CAST(${column} AS INTEGER) THEN CAST(${column} AS INTEGER) ELSE ${column} END`;
 
+/**
+ * Each field of a page row (manifest-format's MANIFEST_SOURCE_FIELDS) as SQL over the page query's
+ * tables. A run's rows leave out the run's date and the stop's position (read once per stop and
+ * given to the shaper); a recipient's rows take them from each blanket's own run.
+ */
 const fieldSql = (runDate: string, position: string, checkedOn: string): Record<(typeof MANIFEST_SOURCE_FIELDS)[number], string> => ({
   runDate,
   position,

@@ -3,6 +3,7 @@
  * the fields the guideline check reads and the payloads it sends. No zod here.
  */
 import type { BlanketFields } from '@shared/schemas/blanket';
+import { pickBlanketFields } from '@shared/schemas/blanket-values';
 import type { BlanketCreateInput, BlanketUpdate } from '@shared/schemas/blanket-log';
 import { fromCm, toCm, type LengthUnit } from '@shared/sizing/units';
 import type { BlanketFormValues } from './blanket-form-schema';
@@ -40,16 +41,8 @@ export function guidelineFields(v: Partial<BlanketFormValues>): Partial<BlanketF
 
 function logFields(v: BlanketFormValues) {
   return {
-    widthCm: cmFrom(v.width, v.unit),
-    lengthCm: cmFrom(v.length, v.unit),
-    yarnWeight: v.yarnWeight,
-    fibres: v.fibres,
-    features: v.features,
-    machineWashable: v.machineWashable,
-    dryerSafe: v.dryerSafe,
-    smokeFree: v.smokeFree,
-    petFree: v.petFree,
-    newYarn: v.newYarn,
+    // The fields the guideline check reads, the sides in cm.
+    ...pickBlanketFields({ ...v, widthCm: cmFrom(v.width, v.unit), lengthCm: cmFrom(v.length, v.unit) }),
     colours: v.colours,
     bodyStitch: v.bodyStitch,
     borderId: v.borderId === '' ? null : v.borderId,
