@@ -7,7 +7,8 @@
  *
  * Starts Kindloop's bundled server (as `npm start` does) on a copy of the database and the bare
  * baseline, each in its own process; signs in as the demo volunteer and organiser; sends each route
- * its requests one after another over one kept-alive connection and reads the CPU each server
+ * its requests one after another over one kept-alive connection per server, the two servers taking
+ * turns every few requests, and reads the CPU each server
  * process used from /proc/<pid>/stat. Prints milliseconds of CPU per request for both and the ratio.
  * With `--profile DIR` the Kindloop process writes a V8 CPU profile into DIR when it stops.
  */
@@ -27,6 +28,7 @@ const PORT = 3421;
 const MAIL_PORT = 3422;
 const BARE_PORT = 3423;
 const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });
+const bareAgent = new http.Agent({ keepAlive: true, maxSockets: 1 });
 
 /** User plus system CPU of a process so far, in milliseconds (fields 14 and 15 of /proc/<pid>/stat). */
 function cpuMs(pid: number): number {
@@ -36,14 +38,38 @@ function cpuMs(pid: number): number {
   return (ticks * 1000) / 100;
 }
 
-async function cpuPerRequest(pid: number, port: number, url: string, headers: Record<string, string>): Promise<number> {
-  for (let i = 0; i < 30; i++) await raw(port, url, { headers, agent });
-  const before = cpuMs(pid);
-  for (let i = 0; i < REQUESTS; i++) {
-    const r = await raw(port, url, { headers, agent });
-    if (r.status !== 200) throw new Error(`${url} answered ${r.status}`);
+/** Requests of one side sent back to back before the other side takes its turn. */
+const CHUNK = 25;
+
+/**
+ * CPU per request of Kindloop and of bare Express on one route, the two taking turns every
+ * CHUNK requests, so that a change in the machine's load or clock during the run falls on both
+ * alike (measured one after the other, the bare side's own figure moved by up to a factor of 3).
+ */
+async function cpuPerRequest(
+  kindloop: { pid: number; port: number; url: string; headers: Record<string, string> },
+  bare: { pid: number; port: number; url: string },
+): Promise<{ k: number; b: number }> {
+  const send = async (port: number, url: string, headers: Record<string, string>, n: number) => {
+    for (let i = 0; i < n; i++) {
+      const r = await raw(port, url, { headers, agent: port === kindloop.port ? agent : bareAgent });
+      if (r.status !== 200) throw new Error(`${url} answered ${r.status}`);
+    }
+  };
+  await send(kindloop.port, kindloop.url, kindloop.headers, 30);
+  await send(bare.port, bare.url, {}, 30);
+  let k = 0;
+  let b = 0;
+  for (let done = 0; done < REQUESTS; done += CHUNK) {
+    const n = Math.min(CHUNK, REQUESTS - done);
+    let before = cpuMs(kindloop.pid);
+    await send(kindloop.port, kindloop.url, kindloop.headers, n);
+    k += cpuMs(kindloop.pid) - before;
+    before = cpuMs(bare.pid);
+    await send(bare.port, bare.url, {}, n);
+    b += cpuMs(bare.pid) - before;
   }
-  return (cpuMs(pid) - before) / REQUESTS;
+  return { k: k / REQUESTS, b: b / REQUESTS };
 }
 
 async function main() {
@@ -69,8 +95,10 @@ async function main() {
     console.log('| route (role) | bytes | Kindloop CPU ms/req | bare CPU ms/req | ratio (bare ÷ Kindloop) |');
     console.log('|---|---|---|---|---|');
     for (const [i, r] of routes.entries()) {
-      const k = await cpuPerRequest(server.pid!, PORT, r.url, { cookie: r.cookie });
-      const b = await cpuPerRequest(bare.pid!, BARE_PORT, `/r/${i}`, {});
+      const { k, b } = await cpuPerRequest(
+        { pid: server.pid!, port: PORT, url: r.url, headers: { cookie: r.cookie } },
+        { pid: bare.pid!, port: BARE_PORT, url: `/r/${i}` },
+      );
       console.log(`| ${r.name} | ${bodies[i]!.length.toLocaleString('en')} | ${k.toFixed(2)} | ${b.toFixed(2)} | ${(b / k).toFixed(2)}× |`);
     }
     console.log(`\nload average afterwards ${os.loadavg().map((l) => l.toFixed(1)).join(' ')}`);

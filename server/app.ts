@@ -14,6 +14,8 @@ import { mountRoutes, type RouteDef } from './modules/route-table';
 import { allRoutes } from './modules/all-routes';
 import { preparedRead } from './db/prepared-read';
 import { KEPT_MAX_MS, sessionWriteGeneration } from './db/kept';
+import { KeptDoor } from './lib/kept-door';
+import { driveDaySpan } from './modules/bookings/drive-clock';
 
 /** How stale the session's stamp (and its stored expiry) may grow before a request renews it. */
 export const TOUCH_EVERY_MS = 60_000;
@@ -27,7 +29,7 @@ export interface AppDeps {
 }
 
 export interface KindloopApp extends Express {
-  locals: Express['locals'] & { routes: RouteDef[]; close: () => void };
+  locals: Express['locals'] & { routes: RouteDef[]; close: () => void; door: KeptDoor };
 }
 
 export function createApp(deps: AppDeps): KindloopApp {
@@ -35,6 +37,12 @@ export function createApp(deps: AppDeps): KindloopApp {
   const app = express() as KindloopApp;
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+
+  const SESSION_COOKIE = 'kindloop.sid';
+  // A session asking again for a kept answer, with nothing written since, is answered here, with
+  // the headers it had the first time, security headers included (server/lib/kept-door.ts).
+  const door = new KeptDoor({ cookieName: SESSION_COOKIE, secret: deps.sessionSecret, touchEveryMs: TOUCH_EVERY_MS, daySpan: driveDaySpan });
+  app.use(door.middleware);
 
   app.use(
     helmet({
@@ -113,7 +121,7 @@ export function createApp(deps: AppDeps): KindloopApp {
   app.use(
     '/api',
     session({
-      name: 'kindloop.sid',
+      name: SESSION_COOKIE,
       secret: deps.sessionSecret,
       store,
       resave: false,
@@ -176,6 +184,7 @@ export function createApp(deps: AppDeps): KindloopApp {
   app.use(errorHandler);
 
   app.locals.routes = routes;
+  app.locals.door = door;
   app.locals.close = () => (store as unknown as { stopExpiringSessions: () => void }).stopExpiringSessions();
   return app;
 }

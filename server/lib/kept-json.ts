@@ -1,10 +1,11 @@
 import { createHash } from 'node:crypto';
 import { gzipSync } from 'node:zlib';
-import type { Request, RequestHandler } from 'express';
+import type { Request, RequestHandler, Response } from 'express';
 import { Drive } from '../db/models/drive';
 import { keptUntilWrite } from '../db/kept';
 import { driveToday } from '../modules/bookings/drive-clock';
 import { nowMs } from './clock';
+import { KeptDoor, type DoorAnswer } from './kept-door';
 
 export interface KeptJsonOptions<T> {
   /**
@@ -16,11 +17,8 @@ export interface KeptJsonOptions<T> {
   until?: (answer: T) => number;
 }
 
-interface Kept {
-  body: Buffer;
-  /** The body gzipped, made on the first request that accepts it. */
-  gzipped?: Buffer;
-  etag: string;
+/** The body, its gzip (made on the first request that accepts it) and ETag, and when it stops holding. */
+interface Kept extends DoorAnswer {
   until: number;
 }
 
@@ -58,19 +56,27 @@ export function keptJson<T>(opts: KeptJsonOptions<T>, answer: (req: Request) => 
     );
     res.setHeader('ETag', kept.etag);
     res.type('application/json');
-    // Gzipped once per kept answer rather than on every request; the compression middleware leaves
-    // a response that already names its encoding alone.
-    if (kept.body.length >= GZIP_FROM_BYTES) {
-      res.vary('Accept-Encoding');
-      if (req.acceptsEncodings('gzip', 'identity') === 'gzip') {
-        kept.gzipped ??= gzipSync(kept.body);
-        res.setHeader('Content-Encoding', 'gzip');
-        // Express answers 304 itself when the request's If-None-Match matches the ETag set here.
-        return res.send(kept.gzipped);
-      }
-    }
-    res.send(kept.body);
+    if (kept.body.length >= GZIP_FROM_BYTES) res.vary('Accept-Encoding');
+    // The same session asking again for this URL, with nothing written meanwhile, is answered
+    // before the session and the router run (server/lib/kept-door.ts).
+    KeptDoor.keep(req, res, kept, kept.until, sendKept);
+    sendKept(req, res, kept);
   };
   OWN_ENCODING.add(handler);
   return handler;
+}
+
+/**
+ * A kept answer's bytes, gzipped once per kept answer rather than on every request (the compression
+ * middleware leaves a response that already names its encoding alone). Express answers 304 itself
+ * when the request's If-None-Match matches the ETag already set.
+ */
+function sendKept(req: Request, res: Response, kept: DoorAnswer): void {
+  if (kept.body.length >= GZIP_FROM_BYTES && req.acceptsEncodings('gzip', 'identity') === 'gzip') {
+    kept.gzipped ??= gzipSync(kept.body);
+    res.setHeader('Content-Encoding', 'gzip');
+    res.send(kept.gzipped);
+    return;
+  }
+  res.send(kept.body);
 }

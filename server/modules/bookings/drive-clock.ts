@@ -64,6 +64,12 @@ function dayAt(zone: string, at: number): string {
   return today;
 }
 
+/**
+ * The product-clock instants at which the drive's day last worked out starts and ends (an empty
+ * span before any was), for answers kept only while the clock is within the day they were read on.
+ */
+export const driveDaySpan = (): { from: number; to: number } => (lastDay ? { from: lastDay.from, to: lastDay.to } : { from: 0, to: 0 });
+
 export async function driveToday(transaction?: Transaction): Promise<string> {
   return (await driveNow(transaction)).today;
 }
