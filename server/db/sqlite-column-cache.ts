@@ -24,6 +24,12 @@ class CachingDatabase extends sqlite3.Database {
    * instances. `all` steps the statement to its end, so it holds no read transaction between calls.
    */
   async cachedAll<T>(sql: string, params: unknown[]): Promise<T[]> {
+    const statement = await this.cachedStatement(sql);
+    return new Promise((resolve, reject) => statement.all(params, (err: Error | null, rows: T[]) => (err ? reject(err) : resolve(rows))));
+  }
+
+  /** The statement for `sql`, prepared on this connection once and kept until it closes. */
+  cachedStatement(sql: string): Promise<sqlite3.Statement> {
     let ready = this.statements.get(sql);
     if (!ready) {
       const preparing = new Promise<sqlite3.Statement>((resolve, reject) => {
@@ -36,8 +42,7 @@ class CachingDatabase extends sqlite3.Database {
       this.statements.set(sql, preparing);
       ready = preparing;
     }
-    const statement = await ready;
-    return new Promise((resolve, reject) => statement.all(params, (err: Error | null, rows: T[]) => (err ? reject(err) : resolve(rows))));
+    return ready;
   }
 
   /** SQLite refuses to close a connection that still has prepared statements; finalise ours first. */

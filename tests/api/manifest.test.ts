@@ -51,6 +51,8 @@ beforeAll(async () => {
   latestChecker = checkers[checkers.length - 1]!.name;
   await assignedBlanket(anonymousMaker.id, shelter.id, { colours: '-2+3 stripes', labelName: 'anonymous' });
   await assignedBlanket(maker.id, shelter.id, { colours: 'cream and moss' });
+  // Measured at intake on one side only, and not for a smoke-free or a pet-free home.
+  await assignedBlanket(maker.id, shelter.id, { colours: 'one side measured', measuredWidthCm: 70, smokeFree: false, petFree: false, dryerSafe: false });
   const res = await coordinator.post('/api/runs', { runDate: '2026-12-20', driverId: maker.id, startSiteId: site.id, recipientIds: [shelter.id] });
   run = res.body.run;
 });
@@ -84,6 +86,12 @@ describe('GET /api/runs/:id/manifest.csv', () => {
     expect([checked[col('Checked by')], checked[col('Checked on')]]).toEqual([latestChecker, '2026-11-30']);
     const unchecked = rows.find((r) => r[col('Colours')] === 'cream and moss')!;
     expect([unchecked[col('Checked by')], unchecked[col('Checked on')]]).toEqual(['', '']);
+    // One side measured is no size on record: the logged 80 × 100 cm stands (sizeOnRecord).
+    const half = rows.find((r) => r[col('Colours')] === 'one side measured')!;
+    expect([half[col('Width (cm)')], half[col('Length (cm)')], half[col('Width (in)')], half[col('Length (in)')]]).toEqual(['80', '100', '31.5', '39.4']);
+    const care = ['Machine washable', 'Dryer safe', 'Smoke-free home', 'Pet-free home'] as const;
+    expect(care.map((c) => half[col(c)])).toEqual(['yes', 'no', 'no', 'no']);
+    expect(care.map((c) => unchecked[col(c)])).toEqual(['yes', 'yes', 'yes', 'yes']);
   });
 
   it("gives the check's day in the drive's zone, not in UTC (decision 0015)", async () => {

@@ -1,7 +1,7 @@
 import { stringify, type CastReturnObject, type Options, type Stringifier } from 'csv-stringify';
 import { sizeCategoryFor } from '@shared/guidelines/size-categories';
 import { featureLabel, fibreLabel, yarnWeightName } from '@shared/guidelines/wording';
-import { sizeOnRecord, type Feature, type Fibre } from '@shared/schemas/blanket';
+import type { Feature, Fibre } from '@shared/schemas/blanket';
 import { fromCm } from '@shared/sizing/units';
 
 /** The manifest's columns, in our own words, in the order a driver and a recipient read them. */
@@ -34,56 +34,60 @@ export const MANIFEST_COLUMNS = [
  * One blanket as the page query hands it over: a JSON array with the fields in this order (the
  * service builds its SQL from the same list). An array parsed from one JSON text per page costs far
  * less than an object per row from the driver: most of a large manifest's time went into making and
- * copying those objects. SQLite gives JSON columns as text, booleans as 0/1 and the check's day
- * ready made: the drive's local day of its UTC timestamp.
+ * copying those objects. Every value in that text is work twice over, once for SQLite to write it
+ * and once for JSON.parse to read it, so SQLite hands over what it can decide exactly and no more:
+ * the size on record (measured where both sides were), the four care answers as one number
+ * (MANIFEST_CARE), the maker's name only where the label carries it, the check's day ready made (the
+ * drive's local day of its UTC timestamp). JSON columns come as text. The run's date and the stop's
+ * position come last, and only in a recipient's rows: a run's rows leave them out.
  */
 export const MANIFEST_SOURCE_FIELDS = [
-  'runDate',
-  'position',
   'box',
   'blanketId',
   'code',
   'widthCm',
   'lengthCm',
-  'measuredWidthCm',
-  'measuredLengthCm',
   'yarnWeight',
   'fibres',
   'colours',
   'features',
-  'machineWashable',
-  'dryerSafe',
-  'smokeFree',
-  'petFree',
+  'care',
   'labelName',
-  'makerName',
   'checkedBy',
   'checkedOn',
+  'runDate',
+  'position',
 ] as const;
 
 export type ManifestSourceRow = [
-  runDate: string | null,
-  position: number | null,
   box: number | null,
   blanketId: number,
   code: string,
+  /** The size on record (sizeOnRecord): the measured size where both sides were measured. */
   widthCm: number,
   lengthCm: number,
-  measuredWidthCm: number | null,
-  measuredLengthCm: number | null,
   yarnWeight: number,
   fibres: string,
   colours: string,
   features: string,
-  machineWashable: number,
-  dryerSafe: number,
-  smokeFree: number,
-  petFree: number,
-  labelName: string,
-  makerName: string | null,
+  /** The care answers, one bit each (MANIFEST_CARE). */
+  care: number,
+  /** The maker's name, or null where the label says "Anonymous" (or the maker has no name). */
+  labelName: string | null,
   checkedBy: string | null,
   checkedOn: string | null,
+  runDate?: string | null,
+  position?: number | null,
 ];
+
+/** The yes/no columns, in column order, each with its blanket field and its bit in a source row's `care`. */
+export const MANIFEST_CARE = [
+  { field: 'machineWashable', bit: 8 },
+  { field: 'dryerSafe', bit: 4 },
+  { field: 'smokeFree', bit: 2 },
+  { field: 'petFree', bit: 1 },
+] as const;
+const [WASHABLE, DRYER, SMOKE, PET] = MANIFEST_CARE.map((c) => c.bit) as [number, number, number, number];
 
 /** Where the blanket goes: the same for every row of a stop, so it is passed once, not read per row. */
 export interface ManifestDestination {
@@ -96,7 +100,7 @@ export interface ManifestDestination {
 
 export type ManifestRecord = Array<string | number>;
 
-const yesNo = (v: number | boolean) => (v ? 'yes' : 'no');
+const yesNo = (care: number, bit: number) => (care & bit ? 'yes' : 'no');
 const oneDecimal = (n: number) => Math.round(n * 10) / 10;
 
 /** The label name as the maker chose it: their first name, or "Anonymous". */
@@ -122,7 +126,9 @@ function remembered<K, V>(fn: (k: K) => V, limit = 4096): (k: K) => V {
 /**
  * A shaper for one manifest: turns page rows into records in column order. The words that depend on
  * a stored list or a table (fibres, features, yarn weight, the maker's first name) are worked out once
- * per distinct value and remembered for the rest of the manifest.
+ * per distinct value and remembered for the rest of the manifest. SQLite could not spell these out
+ * exactly as JavaScript does (a first name is cut at any Unicode space), and handing over finished
+ * words measured slower: longer text to write and to parse (bench/README.md).
  */
 export function manifestShaper(): (r: ManifestSourceRow, to: ManifestDestination) => ManifestRecord {
   const fibres = remembered((text: string) => (JSON.parse(text) as Fibre[]).map(fibreLabel).join('; '));
@@ -130,30 +136,32 @@ export function manifestShaper(): (r: ManifestSourceRow, to: ManifestDestination
   const weight = remembered((w: number) => `${w} (${yarnWeightName(w)})`);
   const firstName = remembered((name: string | null) => label('first-name', name));
   return (r, to) => {
-    const { widthCm, lengthCm } = sizeOnRecord({ widthCm: r[5], lengthCm: r[6], measuredWidthCm: r[7], measuredLengthCm: r[8] });
+    const widthCm = r[3];
+    const lengthCm = r[4];
+    const care = r[9];
     return [
-      r[0] ?? to.runDate ?? '',
-      r[1] ?? to.position ?? '',
+      r[13] ?? to.runDate ?? '',
+      r[14] ?? to.position ?? '',
       to.recipient,
       to.address,
-      r[2] ?? '',
-      r[4],
+      r[0] ?? '',
+      r[2],
       sizeCategoryFor(widthCm, lengthCm) ?? 'outside the size table',
       oneDecimal(widthCm),
       oneDecimal(lengthCm),
       oneDecimal(fromCm(widthCm, 'in')),
       oneDecimal(fromCm(lengthCm, 'in')),
-      weight(r[9]),
-      fibres(r[10]),
-      r[11],
-      features(r[12]),
-      yesNo(r[13]),
-      yesNo(r[14]),
-      yesNo(r[15]),
-      yesNo(r[16]),
-      r[17] === 'anonymous' ? 'Anonymous' : firstName(r[18]),
-      r[19] ?? '',
-      r[20] ?? '',
+      weight(r[5]),
+      fibres(r[6]),
+      r[7],
+      features(r[8]),
+      yesNo(care, WASHABLE),
+      yesNo(care, DRYER),
+      yesNo(care, SMOKE),
+      yesNo(care, PET),
+      firstName(r[10]),
+      r[11] ?? '',
+      r[12] ?? '',
     ];
   };
 }

@@ -13,13 +13,15 @@ import type { Actor } from '../pledges/pledges.service';
 import { ASSIGNED_STATUSES } from '@shared/blankets/status';
 import type { Page } from '@shared/schemas/page';
 import type { ExportView } from '@shared/schemas/run';
-import { MANIFEST_SOURCE_FIELDS, manifestShaper, manifestStringifier, type ManifestRecord, type ManifestSourceRow } from './manifest-format';
-import { preparedRead } from '../../db/prepared-read';
+import { MANIFEST_CARE, MANIFEST_SOURCE_FIELDS, manifestShaper, manifestStringifier, type ManifestRecord, type ManifestSourceRow } from './manifest-format';
+import { preparedReader } from '../../db/prepared-read';
 import { driveToday, driveZone } from '../bookings/drive-clock';
 import { DAY_MS, localDayOf, zoneSpans } from '../drive/glance-sql';
 import { nowMs } from '../../lib/clock';
 
 export type ManifestTarget = { kind: 'run'; id: number } | { kind: 'recipient'; id: number };
+
+type SourceField = (typeof MANIFEST_SOURCE_FIELDS)[number];
 
 /** Rows read from the database per query: enough to keep SQLite busy, few enough to keep memory flat. */
 export const MANIFEST_PAGE = 1000;
@@ -31,32 +33,36 @@ export const MANIFEST_PAGE = 1000;
 const exactNumber = (column: string) => `CASE WHEN ${column} = CAST(${column} AS INTEGER) THEN CAST(${column} AS INTEGER) ELSE ${column} END`;
 
 /**
- * Each field of a page row (manifest-format's MANIFEST_SOURCE_FIELDS) as SQL over the page query's
- * tables. A run's rows leave out the run's date and the stop's position (read once per stop and
- * given to the shaper); a recipient's rows take them from each blanket's own run.
+ * The size on record as SQL, one side at a time: the measured size where both sides were measured,
+ * else the logged one (shared/schemas/blanket.ts, sizeOnRecord, the same rule).
  */
-const fieldSql = (runDate: string, position: string, checkedOn: string): Record<(typeof MANIFEST_SOURCE_FIELDS)[number], string> => ({
-  runDate,
-  position,
+const sizeOnRecord = (side: 'Width' | 'Length') =>
+  `CASE WHEN b.measuredWidthCm IS NOT NULL AND b.measuredLengthCm IS NOT NULL THEN ${exactNumber(`b.measured${side}Cm`)} ELSE ${exactNumber(`b.${side.toLowerCase()}Cm`)} END`;
+
+/** The four care answers as one number, a bit each where the answer is yes (SQLite's truth, as JavaScript's for 0/1). */
+const CARE_SQL = MANIFEST_CARE.map((c) => `CASE WHEN b.${c.field} THEN ${c.bit} ELSE 0 END`).join(' + ');
+
+/**
+ * Each field of a page row (manifest-format's MANIFEST_SOURCE_FIELDS) as SQL over the page query's
+ * tables. A run's rows leave out the last two, the run's date and the stop's position (read once
+ * per stop and given to the shaper); a recipient's rows take them from each blanket's own run.
+ */
+const fieldSql = (checkedOn: string): Record<SourceField, string> => ({
   box: 'rb.box',
   blanketId: 'b.id',
   code: 'b.code',
-  widthCm: exactNumber('b.widthCm'),
-  lengthCm: exactNumber('b.lengthCm'),
-  measuredWidthCm: exactNumber('b.measuredWidthCm'),
-  measuredLengthCm: exactNumber('b.measuredLengthCm'),
+  widthCm: sizeOnRecord('Width'),
+  lengthCm: sizeOnRecord('Length'),
   yarnWeight: 'b.yarnWeight',
   fibres: 'b.fibres',
   colours: 'b.colours',
   features: 'b.features',
-  machineWashable: 'b.machineWashable',
-  dryerSafe: 'b.dryerSafe',
-  smokeFree: 'b.smokeFree',
-  petFree: 'b.petFree',
-  labelName: 'b.labelName',
-  makerName: 'maker.name',
+  care: CARE_SQL,
+  labelName: "CASE WHEN b.labelName = 'anonymous' THEN NULL ELSE maker.name END",
   checkedBy: 'checker.name',
   checkedOn,
+  runDate: 'run.runDate',
+  position: 's.position',
 });
 
 /**
@@ -70,7 +76,6 @@ const CHECKED_JOIN = `
     (SELECT e.id FROM blanket_events e WHERE e.blanketId = b.id AND e.toStatus = 'checked' ORDER BY e.createdAt DESC, e.id DESC LIMIT 1)
   LEFT JOIN users checker ON checker.id = checkedEvent.actorId`;
 
-type SourceField = (typeof MANIFEST_SOURCE_FIELDS)[number];
 interface PageQuery {
   sql: string;
   /** The keyset columns, as positions in a page row. */
@@ -82,14 +87,14 @@ interface PageQuery {
  * JSON array of arrays. The driver then hands over one string per page instead of an object per row,
  * and JSON.parse makes the rows far faster than the driver's per-column conversion did.
  */
-function pageQuery(inner: { fields: Record<SourceField, string>; from: string; where: string; orderBy: SourceField[] }): PageQuery {
-  const select = MANIFEST_SOURCE_FIELDS.map((f) => `${inner.fields[f]} AS ${f}`).join(', ');
+function pageQuery(inner: { fields: Record<SourceField, string>; only: readonly SourceField[]; from: string; where: string; orderBy: SourceField[] }): PageQuery {
+  const select = inner.only.map((f) => `${inner.fields[f]} AS ${f}`).join(', ');
   // No ORDER BY inside the aggregate: SQLite folds the ordered subquery as it comes, and sorting each
   // page again cost a fifth of the query. readPage checks the order and sorts only if it must.
   return {
-    sql: `SELECT json_group_array(json_array(${MANIFEST_SOURCE_FIELDS.map((f) => `p.${f}`).join(', ')})) AS page
+    sql: `SELECT json_group_array(json_array(${inner.only.map((f) => `p.${f}`).join(', ')})) AS page
     FROM (SELECT ${select} FROM ${inner.from} WHERE ${inner.where} ORDER BY ${inner.orderBy.map((c) => `${inner.fields[c]} ASC`).join(', ')} LIMIT ?) p`,
-    key: inner.orderBy.map((f) => MANIFEST_SOURCE_FIELDS.indexOf(f)),
+    key: inner.orderBy.map((f) => inner.only.indexOf(f)),
   };
 }
 
@@ -98,8 +103,9 @@ const runPage = (checkedOn: string) =>
   pageQuery({
     // The blanket's id from run_blankets, so the ORDER BY is the index's own order: named from
     // blankets, SQLite sorted every page again in a temporary tree.
+    fields: { ...fieldSql(checkedOn), blanketId: 'rb.blanketId' },
     // The run's date and the stop's position are the same on every row: passed once, not per row.
-    fields: { ...fieldSql('NULL', 'NULL', checkedOn), blanketId: 'rb.blanketId' },
+    only: MANIFEST_SOURCE_FIELDS.filter((f) => f !== 'runDate' && f !== 'position'),
     from: `run_blankets rb JOIN blankets b ON b.id = rb.blanketId ${CHECKED_JOIN}`,
     where: 'rb.stopId = ? AND (rb.box, rb.blanketId) > (?, ?)',
     orderBy: ['box', 'blanketId'],
@@ -108,7 +114,8 @@ const runPage = (checkedOn: string) =>
 /** Everything given to one recipient (assigned, packed or delivered), with its run and box where it has one. */
 const recipientPage = (checkedOn: string) =>
   pageQuery({
-    fields: fieldSql('run.runDate', 's.position', checkedOn),
+    fields: fieldSql(checkedOn),
+    only: MANIFEST_SOURCE_FIELDS,
     from: `blankets b
     LEFT JOIN run_blankets rb ON rb.blanketId = b.id
     LEFT JOIN run_stops s ON s.id = rb.stopId
@@ -159,9 +166,13 @@ export function inKeyOrder(rows: ManifestSourceRow[], key: number[]): ManifestSo
   return rows;
 }
 
-async function readPage(sequelize: Sequelize, query: PageQuery, params: unknown[]): Promise<ManifestSourceRow[]> {
-  const [row] = await preparedRead<{ page: string | null }>(sequelize, query.sql, params);
-  return row?.page ? inKeyOrder(JSON.parse(row.page) as ManifestSourceRow[], query.key) : [];
+/** Reads pages of one page query: each call hands its read to SQLite at once (preparedReader). */
+async function pageReader(sequelize: Sequelize, query: PageQuery): Promise<(params: unknown[]) => Promise<ManifestSourceRow[]>> {
+  const read = await preparedReader<{ page: string | null }>(sequelize, query.sql);
+  return async (params) => {
+    const [row] = await read(params);
+    return row?.page ? inKeyOrder(JSON.parse(row.page) as ManifestSourceRow[], query.key) : [];
+  };
 }
 
 /**
@@ -195,12 +206,11 @@ async function* runPages(sequelize: Sequelize, runId: number, pageSize: number):
       WHERE s.runId = ? ORDER BY s.position ASC`,
     { replacements: [runId], type: QueryTypes.SELECT },
   );
-  const { run: query } = await pageQueriesNow();
+  const readPage = await pageReader(sequelize, (await pageQueriesNow()).run);
   const shape = manifestShaper();
   for (const stop of stops) {
     const to = { recipient: stop.recipient, address: stop.address, runDate: stop.runDate, position: stop.position };
-    const read = (after: ManifestSourceRow | null) =>
-      readPage(sequelize, query, [stop.id, after?.[BOX] ?? 0, after?.[BLANKET_ID] ?? 0, pageSize]);
+    const read = (after: ManifestSourceRow | null) => readPage([stop.id, after?.[BOX] ?? 0, after?.[BLANKET_ID] ?? 0, pageSize]);
     for await (const rows of keysetPages(read, pageSize)) yield rows.map((r) => shape(r, to));
   }
 }
@@ -211,10 +221,10 @@ async function* recipientPages(sequelize: Sequelize, recipientId: number, pageSi
     type: QueryTypes.SELECT,
   });
   if (!rc) return;
-  const { recipient: query } = await pageQueriesNow();
+  const readPage = await pageReader(sequelize, (await pageQueriesNow()).recipient);
   const shape = manifestShaper();
   const to = { recipient: rc.name, address: rc.address };
-  const read = (after: ManifestSourceRow | null) => readPage(sequelize, query, [recipientId, after?.[BLANKET_ID] ?? 0, pageSize]);
+  const read = (after: ManifestSourceRow | null) => readPage([recipientId, after?.[BLANKET_ID] ?? 0, pageSize]);
   for await (const rows of keysetPages(read, pageSize)) yield rows.map((r) => shape(r, to));
 }
 
