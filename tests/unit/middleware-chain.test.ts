@@ -27,7 +27,7 @@ describe('helmet worked out once', () => {
 
 describe('middlewares run in turn as one', () => {
   const app = (handlers: RequestHandler[]) => express().use('/api', inTurn(handlers)).get('/api/x', answer).use(errors);
-  const mark = (name: string): RequestHandler => (req, res, next) => {
+  const mark = (name: string): RequestHandler => (_req, res, next) => {
     res.append('X-Ran', name);
     next();
   };
