@@ -17,7 +17,8 @@ import path from 'node:path';
 import autocannon from 'autocannon';
 import { growDemo } from './grow-demo';
 import { buildServerIfChanged } from '../scripts/build-if-changed';
-import { arg, benchRoutes, raw, root, startBare, startKindloop, stop, waitFor } from './api-harness';
+import sqlite3 from 'sqlite3';
+import { arg, benchRoutes, raw, root, signIn, startBare, startKindloop, stop, waitFor } from './api-harness';
 
 const DB = path.resolve(root, arg('db', 'bench/data/demo-20k.sqlite'));
 const DURATION = Number(arg('duration', '10'));
@@ -37,8 +38,14 @@ function rssOf(pid: number): number {
   }
 }
 
-async function load(url: string, headers: Record<string, string>) {
-  const r = await autocannon({ url, connections: CONNECTIONS, duration: DURATION, headers });
+/** Makers signed in for the row in which every request comes from one of many sessions. */
+const MAKERS = 50;
+
+async function load(url: string, headers: Record<string, string>, cookies?: string[], duration = DURATION) {
+  let n = 0;
+  // With several sessions, each request takes the next one's cookie in turn.
+  const requests = cookies ? [{ setupRequest: (req: { headers?: Record<string, string> }) => ({ ...req, headers: { ...req.headers, cookie: cookies[n++ % cookies.length]! } }) }] : undefined;
+  const r = await autocannon({ url, connections: CONNECTIONS, duration, headers, ...(requests ? { requests } : {}) } as autocannon.Options);
   const codes = Object.entries((r as { statusCodeStats?: Record<string, { count: number }> }).statusCodeStats ?? {})
     .filter(([code]) => /^\d+$/.test(code) && !code.startsWith('2'))
     .map(([code, s]) => `${s.count} × ${code}`);
@@ -94,13 +101,32 @@ async function main() {
     }
     const rows: string[] = [];
     console.log(`\n${CONNECTIONS} connections, ${DURATION} s per route after a 2 s unmeasured warm-up of each; Kindloop first, then bare Express with the same bytes\n`);
-    for (const [i, r] of routes.entries()) {
-      const k = await load(`http://127.0.0.1:${PORT}${r.url}`, { cookie: r.cookie });
+    const measure = async (name: string, url: string, cookie: string, i: number, cookies?: string[]) => {
+      if (cookies) await load(`http://127.0.0.1:${PORT}${url}`, { cookie }, cookies, 2);
+      const k = await load(`http://127.0.0.1:${PORT}${url}`, { cookie }, cookies);
       const b = await load(`http://127.0.0.1:${BARE_PORT}/r/${i}`, {});
-      const ratio = k.rps / b.rps;
-      const row = `| ${r.name} | ${k.rps.toFixed(0)} | ${k.p50} | ${k.p99} | ${bodies[i]!.length.toLocaleString('en')} | ${gzipBytes[i]!.toLocaleString('en')} | ${b.rps.toFixed(0)} | ${b.p99} | ${ratio.toFixed(2)}× |${k.errors ? ` ${k.kinds}` : ''}`;
+      const row = `| ${name} | ${k.rps.toFixed(0)} | ${k.p50} | ${k.p99} | ${bodies[i]!.length.toLocaleString('en')} | ${gzipBytes[i]!.toLocaleString('en')} | ${b.rps.toFixed(0)} | ${b.p99} | ${(k.rps / b.rps).toFixed(2)}× |${k.errors ? ` ${k.kinds}` : ''}`;
       rows.push(row);
       console.log(row);
+    };
+    for (const [i, r] of routes.entries()) await measure(r.name, r.url, r.cookie, i);
+
+    // Two harder cases for the volunteer's needs, beside the same baseline: fifty makers each with
+    // their own session (each one's first read goes the whole way), and the demo volunteer while
+    // something is written to the database every second (each write drops every kept answer).
+    const needs = routes.findIndex((r) => r.url === '/api/needs');
+    if (needs !== -1) {
+      const cookies: string[] = [];
+      for (let m = 1; m <= MAKERS; m++) cookies.push(await signIn(PORT, `maker-${String(m).padStart(4, '0')}@example.org`));
+      await measure(`GET /api/needs (${MAKERS} makers, a session each)`, '/api/needs', cookies[0]!, needs, cookies);
+      const db = new sqlite3.Database(dbCopy);
+      const writer = setInterval(() => db.run('UPDATE needs SET quantity = quantity WHERE id = (SELECT MIN(id) FROM needs)'), 1000);
+      try {
+        await measure('GET /api/needs (volunteer, a write every second)', '/api/needs', routes[needs]!.cookie, needs);
+      } finally {
+        clearInterval(writer);
+        await new Promise<void>((resolve) => db.close(() => resolve()));
+      }
     }
     clearInterval(sampler);
     maxRss = Math.max(maxRss, rssOf(server.pid!));

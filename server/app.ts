@@ -15,10 +15,21 @@ import { allRoutes } from './modules/all-routes';
 import { preparedRead } from './db/prepared-read';
 import { KEPT_MAX_MS, sessionWriteGeneration } from './db/kept';
 import { KeptDoor } from './lib/kept-door';
+import { fixedHeaders, inTurn } from './lib/middleware-chain';
 import { driveDaySpan } from './modules/bookings/drive-clock';
 
 /** How stale the session's stamp (and its stored expiry) may grow before a request renews it. */
 export const TOUCH_EVERY_MS = 60_000;
+
+/** helmet's options: its defaults, with images from data and blob URLs (photo previews) and inline styles (the map). */
+export const SECURITY_HEADERS: Parameters<typeof helmet>[0] = {
+  contentSecurityPolicy: {
+    directives: {
+      'img-src': ["'self'", 'data:', 'blob:'],
+      'style-src': ["'self'", "'unsafe-inline'"],
+    },
+  },
+};
 
 export interface AppDeps {
   sequelize: Sequelize;
@@ -44,16 +55,8 @@ export function createApp(deps: AppDeps): KindloopApp {
   const door = new KeptDoor({ cookieName: SESSION_COOKIE, secret: deps.sessionSecret, touchEveryMs: TOUCH_EVERY_MS, daySpan: driveDaySpan });
   app.use(door.middleware);
 
-  app.use(
-    helmet({
-      contentSecurityPolicy: {
-        directives: {
-          'img-src': ["'self'", 'data:', 'blob:'],
-          'style-src': ["'self'", "'unsafe-inline'"],
-        },
-      },
-    }),
-  );
+  // helmet's headers depend on these options only, so they are worked out once (lib/middleware-chain.ts).
+  app.use(fixedHeaders(helmet(SECURITY_HEADERS)));
   // gzip for the API's JSON and the built client alike: lists and bundles shrink to about a third.
   // The API's routes get it route by route (mountRoutes), so that kept answers, which carry their
   // own gzip, skip it; a request passes through it at most once.
@@ -66,7 +69,6 @@ export function createApp(deps: AppDeps): KindloopApp {
   };
   const isApi = (url: string) => url.length >= 4 && url.slice(0, 4).toLowerCase() === '/api' && (url.length === 4 || url[4] === '/' || url[4] === '?');
   app.use((req, res, next) => (isApi(req.url) ? next() : compress(req, res, next)));
-  app.use('/api', express.json({ limit: '200kb' }));
 
   const SequelizeStore = connectSessionSequelize(session.Store);
   // disableTouch is an option of the store (7.x) that its type declarations leave out.
@@ -118,9 +120,7 @@ export function createApp(deps: AppDeps): KindloopApp {
   const store = new SessionStore(storeOptions);
   const passport = configurePassport(config.scryptLogN);
 
-  app.use(
-    '/api',
-    session({
+  const sessions = session({
       name: SESSION_COOKIE,
       secret: deps.sessionSecret,
       store,
@@ -137,14 +137,13 @@ export function createApp(deps: AppDeps): KindloopApp {
         secure: config.cookieSecure,
         maxAge: config.sessionIdleMinutes * 60_000,
       },
-    }),
-  );
+    });
   // The store only sweeps expired rows every quarter hour and a copied cookie can be replayed, so
   // the idle limit is enforced here too (OWASP Session Management: idle timeouts on the server).
   const idleMs = config.sessionIdleMinutes * 60_000;
   /** The stamp each session was last renewed from in this process, and when. */
   const renewing = new Map<string, { from: number | undefined; at: number }>();
-  app.use('/api', (req, _res, next) => {
+  const stampSession: express.RequestHandler = (req, _res, next) => {
     const now = Date.now();
     const last = req.session.lastSeen;
     if (last !== undefined && now - last > idleMs) {
@@ -166,10 +165,10 @@ export function createApp(deps: AppDeps): KindloopApp {
       req.session.lastSeen = now;
     }
     next();
-  });
-  app.use('/api', passport.initialize());
-  app.use('/api', passport.session());
-  app.use('/api', csrfProtection);
+  };
+  // Every API request: its JSON body, its session, the idle stamp, who signed in, the CSRF check;
+  // mounted as one layer (lib/middleware-chain.ts).
+  app.use('/api', inTurn([express.json({ limit: '200kb' }), sessions, stampSession, passport.initialize(), passport.session(), csrfProtection]));
 
   const routes = allRoutes({ sequelize, config, passport });
   app.use(mountRoutes(routes, { compress }));
