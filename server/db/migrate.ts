@@ -11,6 +11,7 @@ import * as m0070 from './migrations/0070-delivery-runs';
 import * as m0090 from './migrations/0090-thank-you-mail';
 import * as m0091 from './migrations/0091-glance-indexes';
 import * as m0100 from './migrations/0100-missed-drop-offs';
+import * as m0130 from './migrations/0130-latest-check-index';
 
 /**
  * Migrations are listed here in order rather than globbed, so the same list works under tsx, in
@@ -29,6 +30,7 @@ const migrations = [
   { name: '0090-thank-you-mail', ...m0090 },
   { name: '0091-glance-indexes', ...m0091 },
   { name: '0100-missed-drop-offs', ...m0100 },
+  { name: '0130-latest-check-index', ...m0130 },
 ];
 
 const TABLE = 'schema_migrations';

@@ -14,7 +14,7 @@ import { ASSIGNED_STATUSES } from '@shared/blankets/status';
 import type { Page } from '@shared/schemas/page';
 import type { ExportView } from '@shared/schemas/run';
 import { MANIFEST_CARE, MANIFEST_SOURCE_FIELDS, manifestShaper, manifestStringifier, type ManifestRecord, type ManifestSourceRow } from './manifest-format';
-import { preparedReader } from '../../db/prepared-read';
+import { preparedRead, preparedReader } from '../../db/prepared-read';
 import { driveToday, driveZone } from '../bookings/drive-clock';
 import { DAY_MS, localDayOf, zoneSpans } from '../drive/glance-sql';
 import { nowMs } from '../../lib/clock';
@@ -43,11 +43,26 @@ const sizeOnRecord = (side: 'Width' | 'Length') =>
 const CARE_SQL = MANIFEST_CARE.map((c) => `CASE WHEN b.${c.field} THEN ${c.bit} ELSE 0 END`).join(' + ');
 
 /**
+ * The latest "checked" step of the blanket's history: when, and who passed it. Ordered by time on the
+ * (blanketId, toStatus, createdAt, id, actorId) index, both lookups are answered by the index alone
+ * (migration 0130); joining the history entry itself made SQLite fetch each entry's large record of
+ * the check from the table. Asked as MAX(id), SQLite took the blanketId index and read every history
+ * entry of the blanket to test its status.
+ */
+const latestCheck = (column: 'createdAt' | 'actorId') =>
+  `(SELECT e.${column} FROM blanket_events e WHERE e.blanketId = b.id AND e.toStatus = 'checked' ORDER BY e.createdAt DESC, e.id DESC LIMIT 1)`;
+/**
+ * People are named by id in the page and by name in the service (peopleNames): a drive has a few
+ * thousand of them against a manifest's hundred thousand rows, and looking each row's two names up
+ * in SQLite was two more table searches per row.
+ */
+
+/**
  * Each field of a page row (manifest-format's MANIFEST_SOURCE_FIELDS) as SQL over the page query's
  * tables. A run's rows leave out the last two, the run's date and the stop's position (read once
  * per stop and given to the shaper); a recipient's rows take them from each blanket's own run.
  */
-const fieldSql = (checkedOn: string): Record<SourceField, string> => ({
+const fieldSql = (): Record<SourceField, string> => ({
   box: 'rb.box',
   blanketId: 'b.id',
   code: 'b.code',
@@ -58,23 +73,15 @@ const fieldSql = (checkedOn: string): Record<SourceField, string> => ({
   colours: 'b.colours',
   features: 'b.features',
   care: CARE_SQL,
-  labelName: "CASE WHEN b.labelName = 'anonymous' THEN NULL ELSE maker.name END",
-  checkedBy: 'checker.name',
-  checkedOn,
+  // The maker's and the checker's ids here; named in the service (peopleNames). Every blanket has a
+  // maker (blankets.userId is required and its user cannot be deleted).
+  labelName: "CASE WHEN b.labelName = 'anonymous' THEN NULL ELSE b.userId END",
+  checkedBy: latestCheck('actorId'),
+  // The check's stored time; the page's outer query makes it the drive's local day (pageQuery's `outer`).
+  checkedOn: latestCheck('createdAt'),
   runDate: 'run.runDate',
   position: 's.position',
 });
-
-/**
- * The latest "checked" step of the blanket's history: who passed it and when. Ordered by time on the
- * (blanketId, toStatus, createdAt) index, the lookup never leaves the index; asked as MAX(id), SQLite
- * took the blanketId index and read every history entry of the blanket to test its status.
- */
-const CHECKED_JOIN = `
-  JOIN users maker ON maker.id = b.userId
-  LEFT JOIN blanket_events checkedEvent ON checkedEvent.id =
-    (SELECT e.id FROM blanket_events e WHERE e.blanketId = b.id AND e.toStatus = 'checked' ORDER BY e.createdAt DESC, e.id DESC LIMIT 1)
-  LEFT JOIN users checker ON checker.id = checkedEvent.actorId`;
 
 interface PageQuery {
   sql: string;
@@ -87,40 +94,49 @@ interface PageQuery {
  * JSON array of arrays. The driver then hands over one string per page instead of an object per row,
  * and JSON.parse makes the rows far faster than the driver's per-column conversion did.
  */
-function pageQuery(inner: { fields: Record<SourceField, string>; only: readonly SourceField[]; from: string; where: string; orderBy: SourceField[] }): PageQuery {
+function pageQuery(inner: {
+  fields: Record<SourceField, string>;
+  /** Fields finished over the page's own columns (once per row, after the inner query's LIMIT). */
+  outer: Partial<Record<SourceField, (column: string) => string>>;
+  only: readonly SourceField[];
+  from: string;
+  where: string;
+  orderBy: SourceField[];
+}): PageQuery {
   const select = inner.only.map((f) => `${inner.fields[f]} AS ${f}`).join(', ');
   // No ORDER BY inside the aggregate: SQLite folds the ordered subquery as it comes, and sorting each
   // page again cost a fifth of the query. pageReader checks the order and sorts only if it must.
   return {
-    sql: `SELECT json_group_array(json_array(${inner.only.map((f) => `p.${f}`).join(', ')})) AS page
+    sql: `SELECT json_group_array(json_array(${inner.only.map((f) => inner.outer[f]?.(`p.${f}`) ?? `p.${f}`).join(', ')})) AS page
     FROM (SELECT ${select} FROM ${inner.from} WHERE ${inner.where} ORDER BY ${inner.orderBy.map((c) => `${inner.fields[c]} ASC`).join(', ')} LIMIT ?) p`,
     key: inner.orderBy.map((f) => inner.only.indexOf(f)),
   };
 }
 
 /** A run's stop, rows keyed by (box, blanket) on the index that orders them. */
-const runPage = (checkedOn: string) =>
+const runPage = (checkedOn: (column: string) => string) =>
   pageQuery({
     // The blanket's id from run_blankets, so the ORDER BY is the index's own order: named from
     // blankets, SQLite sorted every page again in a temporary tree.
-    fields: { ...fieldSql(checkedOn), blanketId: 'rb.blanketId' },
+    fields: { ...fieldSql(), blanketId: 'rb.blanketId' },
+    outer: { checkedOn },
     // The run's date and the stop's position are the same on every row: passed once, not per row.
     only: MANIFEST_SOURCE_FIELDS.filter((f) => f !== 'runDate' && f !== 'position'),
-    from: `run_blankets rb JOIN blankets b ON b.id = rb.blanketId ${CHECKED_JOIN}`,
+    from: 'run_blankets rb JOIN blankets b ON b.id = rb.blanketId',
     where: 'rb.stopId = ? AND (rb.box, rb.blanketId) > (?, ?)',
     orderBy: ['box', 'blanketId'],
   });
 
 /** Everything given to one recipient (assigned, packed or delivered), with its run and box where it has one. */
-const recipientPage = (checkedOn: string) =>
+const recipientPage = (checkedOn: (column: string) => string) =>
   pageQuery({
-    fields: fieldSql(checkedOn),
+    fields: fieldSql(),
+    outer: { checkedOn },
     only: MANIFEST_SOURCE_FIELDS,
     from: `blankets b
     LEFT JOIN run_blankets rb ON rb.blanketId = b.id
     LEFT JOIN run_stops s ON s.id = rb.stopId
-    LEFT JOIN runs run ON run.id = rb.runId
-    ${CHECKED_JOIN}`,
+    LEFT JOIN runs run ON run.id = rb.runId`,
     where: `b.recipientId = ? AND b.status IN (${ASSIGNED_STATUSES.map((x) => `'${x}'`).join(', ')}) AND b.id > ?`,
     orderBy: ['blanketId'],
   });
@@ -136,16 +152,20 @@ const pageQueries = new Map<string, { run: PageQuery; recipient: PageQuery }>();
  */
 async function pageQueriesNow(): Promise<{ run: PageQuery; recipient: PageQuery }> {
   const now = nowMs();
-  const checkedOn = localDayOf('checkedEvent.createdAt', zoneSpans(await driveZone(), now - CHECKS_LOOK_BACK_DAYS * DAY_MS, now + 2 * DAY_MS));
-  let queries = pageQueries.get(checkedOn);
+  const spans = zoneSpans(await driveZone(), now - CHECKS_LOOK_BACK_DAYS * DAY_MS, now + 2 * DAY_MS);
+  const checkedOn = (column: string) => localDayOf(column, spans);
+  const key = checkedOn('p.checkedOn');
+  let queries = pageQueries.get(key);
   if (!queries) {
     if (pageQueries.size > 16) pageQueries.clear();
-    pageQueries.set(checkedOn, (queries = { run: runPage(checkedOn), recipient: recipientPage(checkedOn) }));
+    pageQueries.set(key, (queries = { run: runPage(checkedOn), recipient: recipientPage(checkedOn) }));
   }
   return queries;
 }
 
 const BOX = MANIFEST_SOURCE_FIELDS.indexOf('box');
+const LABEL_NAME = MANIFEST_SOURCE_FIELDS.indexOf('labelName');
+const CHECKED_BY = MANIFEST_SOURCE_FIELDS.indexOf('checkedBy');
 const BLANKET_ID = MANIFEST_SOURCE_FIELDS.indexOf('blanketId');
 
 /** Compares two page rows by the keyset columns (numbers; a blanket on no run has no box). */
@@ -169,10 +189,24 @@ export function inKeyOrder(rows: ManifestSourceRow[], key: number[]): ManifestSo
 /** Reads pages of one page query: each call hands its read to SQLite at once (preparedReader). */
 async function pageReader(sequelize: Sequelize, query: PageQuery): Promise<(params: unknown[]) => Promise<ManifestSourceRow[]>> {
   const read = await preparedReader<{ page: string | null }>(sequelize, query.sql);
+  const names = await peopleNames(sequelize);
   return async (params) => {
     const [row] = await read(params);
-    return row?.page ? inKeyOrder(JSON.parse(row.page) as ManifestSourceRow[], query.key) : [];
+    if (!row?.page) return [];
+    const rows = JSON.parse(row.page) as ManifestSourceRow[];
+    // The page names people by id (the maker where the label is theirs, the checker).
+    for (const r of rows) {
+      if (r[LABEL_NAME] !== null) r[LABEL_NAME] = names.get(r[LABEL_NAME] as unknown as number) ?? null;
+      if (r[CHECKED_BY] !== null) r[CHECKED_BY] = names.get(r[CHECKED_BY] as unknown as number) ?? null;
+    }
+    return inKeyOrder(rows, query.key);
   };
+}
+
+/** Everyone's name by id, read once per manifest: makers on labels and the people who checked. */
+async function peopleNames(sequelize: Sequelize): Promise<Map<number, string>> {
+  const rows = await preparedRead<{ id: number; name: string }>(sequelize, 'SELECT id, name FROM users', []);
+  return new Map(rows.map((u) => [u.id, u.name]));
 }
 
 /**
