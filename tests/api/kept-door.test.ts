@@ -91,6 +91,23 @@ describe('an answer handed out at the door', () => {
     expect((await request(t.app).get('/api/recipients').set('Cookie', cookie)).status).toBe(401);
   });
 
+  it("stays open through another session's sign-in and sign-out, and closes on this session's own", async () => {
+    const c = await signedIn(t.app, 'coordinator');
+    const cookie = await cookieOf(c);
+    const ask = () => request(t.app).get('/api/recipients').set('Cookie', cookie);
+    expect((await ask()).status).toBe(200);
+    expect((await ask()).status).toBe(200);
+    // Someone else signs in and out: only the sessions table is written.
+    const other = await signedIn(t.app, 'organiser');
+    expect((await other.post('/api/auth/logout')).status).toBeLessThan(300);
+    const before = served();
+    expect((await ask()).status).toBe(200);
+    expect(served()).toBe(before + 1);
+    expect((await c.post('/api/auth/logout')).status).toBeLessThan(300);
+    expect((await ask()).status).toBe(401);
+    expect(served()).toBe(before + 1);
+  });
+
   it('refuses a person deactivated meanwhile', async () => {
     const maker = await signedIn(t.app, 'priya@example.org');
     const coordinator = await signedIn(t.app, 'coordinator');
