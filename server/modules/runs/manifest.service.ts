@@ -90,7 +90,7 @@ interface PageQuery {
 function pageQuery(inner: { fields: Record<SourceField, string>; only: readonly SourceField[]; from: string; where: string; orderBy: SourceField[] }): PageQuery {
   const select = inner.only.map((f) => `${inner.fields[f]} AS ${f}`).join(', ');
   // No ORDER BY inside the aggregate: SQLite folds the ordered subquery as it comes, and sorting each
-  // page again cost a fifth of the query. readPage checks the order and sorts only if it must.
+  // page again cost a fifth of the query. pageReader checks the order and sorts only if it must.
   return {
     sql: `SELECT json_group_array(json_array(${inner.only.map((f) => `p.${f}`).join(', ')})) AS page
     FROM (SELECT ${select} FROM ${inner.from} WHERE ${inner.where} ORDER BY ${inner.orderBy.map((c) => `${inner.fields[c]} ASC`).join(', ')} LIMIT ?) p`,
