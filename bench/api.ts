@@ -115,10 +115,34 @@ async function main() {
     // their own session (each one's first read goes the whole way), and the demo volunteer while
     // something is written to the database every second (each write drops every kept answer).
     const needs = routes.findIndex((r) => r.url === '/api/needs');
+    /** A signed-in session's cookie, with the CSRF token its sign-out will need. */
+    const signOutLater = async (email: string) => {
+      const cookie = await signIn(PORT, email);
+      const csrf = await raw(PORT, '/api/auth/csrf', { headers: { cookie } });
+      return JSON.stringify({ cookie, token: (JSON.parse(csrf.body.toString()) as { csrfToken: string }).csrfToken });
+    };
+    const signOut = async (session: string) => {
+      const { cookie, token } = JSON.parse(session) as { cookie: string; token: string };
+      const r = await raw(PORT, '/api/auth/logout', { method: 'POST', headers: { cookie, 'x-csrf-token': token } });
+      if (r.status >= 300) throw new Error(`sign-out answered ${r.status}`);
+    };
     if (needs !== -1) {
       const cookies: string[] = [];
       for (let m = 1; m <= MAKERS; m++) cookies.push(await signIn(PORT, `maker-${String(m).padStart(4, '0')}@example.org`));
       await measure(`GET /api/needs (${MAKERS} makers, a session each)`, '/api/needs', cookies[0]!, needs, cookies);
+      // The same, while other people's sessions end five times a second (a sign-out writes only
+      // the sessions table, as the renewals of a busy drive's many sessions do).
+      const leaving: string[] = [];
+      for (let m = MAKERS + 1; m <= MAKERS + 5 * (DURATION + 3); m++) leaving.push(await signOutLater(`maker-${String(m).padStart(4, '0')}@example.org`));
+      const signOuts = setInterval(() => {
+        const next = leaving.shift();
+        if (next) void signOut(next);
+      }, 200);
+      try {
+        await measure(`GET /api/needs (${MAKERS} makers, a session each; another session ends every 200 ms)`, '/api/needs', cookies[0]!, needs, cookies);
+      } finally {
+        clearInterval(signOuts);
+      }
       const db = new sqlite3.Database(dbCopy);
       const writer = setInterval(() => db.run('UPDATE needs SET quantity = quantity WHERE id = (SELECT MIN(id) FROM needs)'), 1000);
       try {

@@ -31,6 +31,8 @@ export const SECURITY_HEADERS: Parameters<typeof helmet>[0] = {
   },
 };
 
+const SESSION_COOKIE = 'kindloop.sid';
+
 export interface AppDeps {
   sequelize: Sequelize;
   config: Config;
@@ -49,11 +51,19 @@ export function createApp(deps: AppDeps): KindloopApp {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
 
-  const SESSION_COOKIE = 'kindloop.sid';
-  // A session asking again for a kept answer, with nothing written since, is answered here, with
+  // A session asking again for a kept answer, with nothing written since, is answered first, with
   // the headers it had the first time, security headers included (server/lib/kept-door.ts).
-  const door = new KeptDoor({ cookieName: SESSION_COOKIE, secret: deps.sessionSecret, touchEveryMs: TOUCH_EVERY_MS, daySpan: driveDaySpan });
+  const door = new KeptDoor({
+    cookieName: SESSION_COOKIE,
+    secret: deps.sessionSecret,
+    touchEveryMs: TOUCH_EVERY_MS,
+    daySpan: driveDaySpan,
+    // The session rows as the store below reads and keeps them.
+    keptSessionRow: (sid) => keptSessionRow(sid),
+    readSessionRow: (sid) => readSessionRow(sid),
+  });
   app.use(door.middleware);
+
 
   // helmet's headers depend on these options only, so they are worked out once (lib/middleware-chain.ts).
   app.use(fixedHeaders(helmet(SECURITY_HEADERS)));
@@ -99,25 +109,34 @@ export function createApp(deps: AppDeps): KindloopApp {
     }
     fn(null, data);
   };
+  /** A session's stored row as kept, while nothing has been written to sessions since it was read. */
+  const keptSessionRow = (sid: string): string | undefined => {
+    const kept = keptSessions.get(sid);
+    return kept && kept.generation === sessionWriteGeneration() && Date.now() - kept.at < KEPT_MAX_MS ? kept.data : undefined;
+  };
+  /** A session's stored row, read and kept (undefined when there is none). */
+  const readSessionRow = async (sid: string): Promise<string | undefined> => {
+    const generation = sessionWriteGeneration();
+    const [row] = await preparedRead<{ data: string | null }>(sequelize, 'SELECT data FROM sessions WHERE sid = ?', [sid]);
+    // Only rows that exist are kept: a stream of made-up ids must not fill the memory.
+    if (row?.data && sessionWriteGeneration() === generation) {
+      if (keptSessions.size >= 10_000) keptSessions.clear();
+      keptSessions.set(sid, { generation, at: Date.now(), data: row.data });
+    }
+    return row?.data ?? undefined;
+  };
   class SessionStore extends SequelizeStore {
     override get(sid: string, fn: (err: unknown, session?: session.SessionData | null) => void) {
-      const generation = sessionWriteGeneration();
-      const kept = keptSessions.get(sid);
-      if (kept && kept.generation === generation && Date.now() - kept.at < KEPT_MAX_MS) {
-        queueMicrotask(() => answer(fn, kept.data));
+      const kept = keptSessionRow(sid);
+      if (kept !== undefined) {
+        queueMicrotask(() => answer(fn, kept));
         return;
       }
-      preparedRead<{ data: string | null }>(sequelize, 'SELECT data FROM sessions WHERE sid = ?', [sid]).then(([row]) => {
-        // Only rows that exist are kept: a stream of made-up ids must not fill the memory.
-        if (row?.data && sessionWriteGeneration() === generation) {
-          if (keptSessions.size >= 10_000) keptSessions.clear();
-          keptSessions.set(sid, { generation, at: Date.now(), data: row.data });
-        }
-        answer(fn, row?.data);
-      }, fn);
+      readSessionRow(sid).then((data) => answer(fn, data), fn);
     }
   }
   const store = new SessionStore(storeOptions);
+
   const passport = configurePassport(config.scryptLogN);
 
   const sessions = session({

@@ -63,6 +63,8 @@ interface Store {
   bytes: number;
   entries: Map<string, Entry>;
   running: Map<string, { generation: number; promise: Promise<unknown> }>;
+  /** Whether an old answer is being read again behind the kept one (one at a time, see keptUntilWrite). */
+  refreshing: boolean;
 }
 /** One store per database (tests open several in one process). */
 const stores = new WeakMap<object, Store>();
@@ -72,7 +74,7 @@ const MAX_BYTES = 32 * 2 ** 20;
 
 function storeOf(database: object): Store {
   let s = stores.get(database);
-  if (!s) stores.set(database, (s = { generation: -1, bytes: 0, entries: new Map(), running: new Map() }));
+  if (!s) stores.set(database, (s = { generation: -1, bytes: 0, entries: new Map(), running: new Map(), refreshing: false }));
   return s;
 }
 
@@ -93,7 +95,8 @@ export interface KeepOptions {
  *
  * An answer older than KEPT_MAX_MS with nothing written since is still the truth (the generations
  * say so, other processes' commits included): it is handed out while one fresh read runs behind it,
- * so the waiting requests do not all stall on that read every few seconds under load.
+ * so the waiting requests do not all stall on that read every few seconds under load. Such reads
+ * run one at a time per database.
  */
 export async function keptUntilWrite<T>(database: object, key: string, compute: () => Promise<T>, opts: KeepOptions = {}): Promise<T> {
   const store = storeOf(database);
@@ -101,7 +104,15 @@ export async function keptUntilWrite<T>(database: object, key: string, compute: 
   const wallNow = Date.now();
   const hit = store.entries.get(key);
   if (hit && hit.generation === gen && (hit.until === Infinity || (opts.now?.() ?? wallNow) < hit.until)) {
-    if (wallNow - hit.at >= KEPT_MAX_MS && !store.running.has(key)) readAndKeep(store, key, compute, opts, gen).catch(() => undefined);
+    if (wallNow - hit.at >= KEPT_MAX_MS && !store.running.has(key) && !store.refreshing) {
+      // One at a time: answers kept together grow old together (fifty makers' own lists, say), and
+      // reading them all again at once stalled every request behind them. The others are still
+      // the truth meanwhile, and take their turn on a later request.
+      store.refreshing = true;
+      readAndKeep(store, key, compute, opts, gen)
+        .catch(() => undefined)
+        .finally(() => (store.refreshing = false));
+    }
     return hit.value as T;
   }
   const shared = store.running.get(key);

@@ -18,7 +18,11 @@ const WRONG = 'Wrong e-mail or password';
 function logIn(req: Parameters<RequestHandler>[0], user: Express.User): Promise<void> {
   // passport 0.7 regenerates the session id inside logIn (OWASP Session Management: new id at
   // sign-in, against session fixation); the old session's CSRF token goes with it.
-  return new Promise((resolve, reject) => req.logIn(user, (e) => (e ? reject(e) : resolve())));
+  return new Promise<void>((resolve, reject) => req.logIn(user, (e) => (e ? reject(e) : resolve()))).then(() => {
+    // The new session starts stamped (saved with this answer), so the first page it loads does not
+    // wait for the stamp to be written.
+    req.session.lastSeen = Date.now();
+  });
 }
 
 const HOUR = 60 * 60_000;
