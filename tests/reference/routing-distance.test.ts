@@ -23,10 +23,18 @@ describe('haversine distance', () => {
     fc.assert(
       fc.property(pin, pin, (a, b) => {
         const turf = turfDistance([a.lng, a.lat], [b.lng, b.lat], { units: 'kilometers' });
+        if (Number.isNaN(turf)) {
+          // For two points a hair from antipodal, rounding can push @turf/distance's haversine term
+          // past 1 and its answer is NaN (found by fast-check: -85°, 0° and 85°, 179.99999°). The
+          // distance there is half the circumference, π·R, to within a metre.
+          expect(Math.abs(haversineKm(a, b, turfRadius) - Math.PI * turfRadius)).toBeLessThan(1e-3);
+          return;
+        }
         expect(haversineKm(a, b, turfRadius)).toBeCloseTo(turf, 5);
         expect(Math.abs(haversineKm(a, b) - turf)).toBeLessThanOrEqual(turf * ((turfRadius - EARTH_RADIUS_KM) / EARTH_RADIUS_KM) + 1e-6);
       }),
-      { numRuns: 1000 },
+      // The nearly antipodal pair fast-check once found is always tried first.
+      { numRuns: 1000, examples: [[{ lat: -84.99999986513258, lng: 0 }, { lat: 84.99999999999899, lng: 179.9999915480721 }]] },
     );
   });
 });
