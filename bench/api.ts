@@ -119,10 +119,9 @@ async function main() {
     const signOutLater = async (email: string) => {
       const cookie = await signIn(PORT, email);
       const csrf = await raw(PORT, '/api/auth/csrf', { headers: { cookie } });
-      return JSON.stringify({ cookie, token: (JSON.parse(csrf.body.toString()) as { csrfToken: string }).csrfToken });
+      return { cookie, token: (JSON.parse(csrf.body.toString()) as { csrfToken: string }).csrfToken };
     };
-    const signOut = async (session: string) => {
-      const { cookie, token } = JSON.parse(session) as { cookie: string; token: string };
+    const signOut = async ({ cookie, token }: { cookie: string; token: string }) => {
       const r = await raw(PORT, '/api/auth/logout', { method: 'POST', headers: { cookie, 'x-csrf-token': token } });
       if (r.status >= 300) throw new Error(`sign-out answered ${r.status}`);
     };
@@ -132,7 +131,7 @@ async function main() {
       await measure(`GET /api/needs (${MAKERS} makers, a session each)`, '/api/needs', cookies[0]!, needs, cookies);
       // The same, while other people's sessions end five times a second (a sign-out writes only
       // the sessions table, as the renewals of a busy drive's many sessions do).
-      const leaving: string[] = [];
+      const leaving: Array<{ cookie: string; token: string }> = [];
       for (let m = MAKERS + 1; m <= MAKERS + 5 * (DURATION + 3); m++) leaving.push(await signOutLater(`maker-${String(m).padStart(4, '0')}@example.org`));
       const signOuts = setInterval(() => {
         const next = leaving.shift();

@@ -64,7 +64,6 @@ export function createApp(deps: AppDeps): KindloopApp {
   });
   app.use(door.middleware);
 
-
   // helmet's headers depend on these options only, so they are worked out once (lib/middleware-chain.ts).
   app.use(fixedHeaders(helmet(SECURITY_HEADERS)));
   // gzip for the API's JSON and the built client alike: lists and bundles shrink to about a third.
@@ -140,23 +139,23 @@ export function createApp(deps: AppDeps): KindloopApp {
   const passport = configurePassport(config.scryptLogN);
 
   const sessions = session({
-      name: SESSION_COOKIE,
-      secret: deps.sessionSecret,
-      store,
-      resave: false,
-      saveUninitialized: false,
-      // The cookie is sent again whenever the session is saved, which the stamp below does at least
-      // once a minute while it is used, so its expiry trails the server's idle limit by under a
-      // minute without re-signing a cookie on every answer.
-      rolling: false,
-      // express-session ids are 24 random bytes (192 bits), above OWASP's 128-bit recommendation.
-      cookie: {
-        httpOnly: true,
-        sameSite: 'lax',
-        secure: config.cookieSecure,
-        maxAge: config.sessionIdleMinutes * 60_000,
-      },
-    });
+    name: SESSION_COOKIE,
+    secret: deps.sessionSecret,
+    store,
+    resave: false,
+    saveUninitialized: false,
+    // The cookie is sent again whenever the session is saved, which the stamp below does at least
+    // once a minute while it is used, so its expiry trails the server's idle limit by under a
+    // minute without re-signing a cookie on every answer.
+    rolling: false,
+    // express-session ids are 24 random bytes (192 bits), above OWASP's 128-bit recommendation.
+    cookie: {
+      httpOnly: true,
+      sameSite: 'lax',
+      secure: config.cookieSecure,
+      maxAge: config.sessionIdleMinutes * 60_000,
+    },
+  });
   // The store only sweeps expired rows every quarter hour and a copied cookie can be replayed, so
   // the idle limit is enforced here too (OWASP Session Management: idle timeouts on the server).
   const idleMs = config.sessionIdleMinutes * 60_000;

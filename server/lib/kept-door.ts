@@ -124,8 +124,10 @@ export class KeptDoor {
     return sid;
   }
 
-  private holdsAt(entry: Entry, at: number): boolean {
-    return at >= entry.from && at < entry.until;
+  /** Whether an entry still holds as far as nothing but the session's row is concerned. */
+  private holds(entry: Entry): boolean {
+    const at = nowMs();
+    return entry.generation === writeGeneration() && Date.now() < entry.staleAt && at >= entry.from && at < entry.until;
   }
 
   private serve(req: Request, res: Response, entry: Entry): void {
@@ -145,8 +147,7 @@ export class KeptDoor {
     };
     const entry = this.entries.get(key);
     if (!entry) return arrive();
-    const holds = () => entry.generation === writeGeneration() && Date.now() < entry.staleAt && this.holdsAt(entry, nowMs());
-    if (!holds()) {
+    if (!this.holds(entry)) {
       this.entries.delete(key);
       return arrive();
     }
@@ -168,11 +169,12 @@ export class KeptDoor {
   }
 
   /**
-   * Keep `answer` for the next request of this session to this URL, when nothing has been written
-   * since the request arrived (a kept answer is handed out only under the write generation it was
-   * read under, so it was read under the one the request arrived with), with the session's row. Called by the route once
-   * its headers are set and before it sends; `until` is the product-clock instant the answer stops
-   * holding, `send` how the route sends it (encoding and 304s decided per request).
+   * Keep `answer`, with the session's row, for the next request of this session to this URL, when
+   * nothing has been written since the request arrived (a kept answer is handed out only under the
+   * write generation it was read under, so it was read under the one the request arrived with).
+   * Called by the route once its headers are set and before it sends; `until` is the product-clock
+   * instant the answer stops holding, `send` how the route sends it (encoding and 304s decided per
+   * request).
    */
   static keep(req: Request, res: Response, answer: DoorAnswer, until: number, send: Entry['send']): void {
     const arrival = (req as Arrived)[ARRIVAL];

@@ -52,17 +52,11 @@ const CARE_SQL = MANIFEST_CARE.map((c) => `CASE WHEN b.${c.field} THEN ${c.bit} 
 const latestCheck = (column: 'createdAt' | 'actorId') =>
   `(SELECT e.${column} FROM blanket_events e WHERE e.blanketId = b.id AND e.toStatus = 'checked' ORDER BY e.createdAt DESC, e.id DESC LIMIT 1)`;
 /**
- * People are named by id in the page and by name in the service (peopleNames): a drive has a few
- * thousand of them against a manifest's hundred thousand rows, and looking each row's two names up
- * in SQLite was two more table searches per row.
- */
-
-/**
  * Each field of a page row (manifest-format's MANIFEST_SOURCE_FIELDS) as SQL over the page query's
  * tables. A run's rows leave out the last two, the run's date and the stop's position (read once
  * per stop and given to the shaper); a recipient's rows take them from each blanket's own run.
  */
-const fieldSql = (): Record<SourceField, string> => ({
+const FIELD_SQL: Record<SourceField, string> = {
   box: 'rb.box',
   blanketId: 'b.id',
   code: 'b.code',
@@ -81,7 +75,7 @@ const fieldSql = (): Record<SourceField, string> => ({
   checkedOn: latestCheck('createdAt'),
   runDate: 'run.runDate',
   position: 's.position',
-});
+};
 
 interface PageQuery {
   sql: string;
@@ -118,7 +112,7 @@ const runPage = (checkedOn: (column: string) => string) =>
   pageQuery({
     // The blanket's id from run_blankets, so the ORDER BY is the index's own order: named from
     // blankets, SQLite sorted every page again in a temporary tree.
-    fields: { ...fieldSql(), blanketId: 'rb.blanketId' },
+    fields: { ...FIELD_SQL, blanketId: 'rb.blanketId' },
     outer: { checkedOn },
     // The run's date and the stop's position are the same on every row: passed once, not per row.
     only: MANIFEST_SOURCE_FIELDS.filter((f) => f !== 'runDate' && f !== 'position'),
@@ -130,7 +124,7 @@ const runPage = (checkedOn: (column: string) => string) =>
 /** Everything given to one recipient (assigned, packed or delivered), with its run and box where it has one. */
 const recipientPage = (checkedOn: (column: string) => string) =>
   pageQuery({
-    fields: fieldSql(),
+    fields: FIELD_SQL,
     outer: { checkedOn },
     only: MANIFEST_SOURCE_FIELDS,
     from: `blankets b
@@ -203,7 +197,11 @@ async function pageReader(sequelize: Sequelize, query: PageQuery): Promise<(para
   };
 }
 
-/** Everyone's name by id, read once per manifest: makers on labels and the people who checked. */
+/**
+ * Everyone's name by id, read once per manifest: makers on labels and the people who checked. A
+ * drive has a few thousand people against a manifest's hundred thousand rows, and looking each
+ * row's two names up in SQLite was two more table searches per row.
+ */
 async function peopleNames(sequelize: Sequelize): Promise<Map<number, string>> {
   const rows = await preparedRead<{ id: number; name: string }>(sequelize, 'SELECT id, name FROM users', []);
   return new Map(rows.map((u) => [u.id, u.name]));
