@@ -59,6 +59,14 @@ async function sessionOf(email: string) {
   return (await Session.findAll()).find((r) => r.userId === user.id)!;
 }
 
+/** Makes a person's session stamp older than the renewal interval, as if a minute had passed. */
+async function ageStamp(email: string) {
+  const row = await sessionOf(email);
+  const data = JSON.parse(row.data!);
+  data.lastSeen = Date.now() - TOUCH_EVERY_MS - 1_000;
+  await row.update({ data: JSON.stringify(data) });
+}
+
 describe('the cost of one signed-in read', () => {
   it('reads the session and the user once each after a write, and writes nothing', async () => {
     const c = await signedIn(t.app, 'volunteer');
@@ -102,10 +110,7 @@ describe('the cost of one signed-in read', () => {
   it(`renews a session's stamp once it is older than ${TOUCH_EVERY_MS / 1000} s, and only once`, async () => {
     const c = await signedIn(t.app, 'coordinator');
     await c.get('/api/auth/me');
-    const row = await sessionOf('coordinator@example.org');
-    const data = JSON.parse(row.data!);
-    data.lastSeen = Date.now() - TOUCH_EVERY_MS - 1_000;
-    await row.update({ data: JSON.stringify(data) });
+    await ageStamp('coordinator@example.org');
 
     const renewing = await statementsOf(c, '/api/auth/me');
     expect(sessionWrites(renewing)).toHaveLength(1);
@@ -118,10 +123,7 @@ describe('the cost of one signed-in read', () => {
   it('renews a stale stamp once when twenty requests arrive with it together', async () => {
     const c = await signedIn(t.app, 'hattie@example.org');
     await c.get('/api/auth/me');
-    const row = await sessionOf('hattie@example.org');
-    const data = JSON.parse(row.data!);
-    data.lastSeen = Date.now() - TOUCH_EVERY_MS - 1_000;
-    await row.update({ data: JSON.stringify(data) });
+    await ageStamp('hattie@example.org');
     await settle();
     seen.length = 0;
     const answers = await Promise.all(Array.from({ length: 20 }, () => c.get('/api/auth/me')));
@@ -151,10 +153,7 @@ describe('what a signed-in read sends besides the answer', () => {
     expect(quiet.status).toBe(200);
     expect(sidCookie(quiet)).toBeUndefined();
 
-    const row = await sessionOf('felix@example.org');
-    const data = JSON.parse(row.data!);
-    data.lastSeen = Date.now() - TOUCH_EVERY_MS - 1_000;
-    await row.update({ data: JSON.stringify(data) });
+    await ageStamp('felix@example.org');
     const renewed = await c.get('/api/auth/me');
     expect(renewed.status).toBe(200);
     const cookie = sidCookie(renewed);
